@@ -1,0 +1,48 @@
+using CommunityLead.Api.Data.Entities;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Data;
+
+/// <summary>
+/// The program's store. Handlers use it directly; there is no repository layer over EF Core.
+/// Add a migration: dotnet ef migrations add &lt;Name&gt; --project src/CommunityLead.Api --output-dir Data/Migrations
+/// </summary>
+public class CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : DbContext(options)
+{
+    public DbSet<Household> Households => Set<Household>();
+    public DbSet<Kit> Kits => Set<Kit>();
+    public DbSet<Collection> Collections => Set<Collection>();
+    public DbSet<Sample> Samples => Set<Sample>();
+    public DbSet<KitFlag> KitFlags => Set<KitFlag>();
+    public DbSet<AuditEntry> AuditTrail => Set<AuditEntry>();
+    public DbSet<ApiKey> ApiKeys => Set<ApiKey>();
+
+    protected override void OnModelCreating(ModelBuilder modelBuilder) =>
+        modelBuilder.ApplyConfigurationsFromAssembly(typeof(CommunityLeadDb).Assembly);
+
+    protected override void ConfigureConventions(ModelConfigurationBuilder configurationBuilder)
+    {
+        // Enums as their names: the database stays readable and a reordered enum can't corrupt rows.
+        configurationBuilder.Properties<Enum>().HaveConversion<string>().HaveMaxLength(40);
+        configurationBuilder.Properties<DateTime>().HaveConversion<UtcDateTimeConverter>();
+    }
+
+    public override int SaveChanges(bool acceptAllChangesOnSuccess)
+    {
+        GuardAuditTrail();
+        return base.SaveChanges(acceptAllChangesOnSuccess);
+    }
+
+    public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
+    {
+        GuardAuditTrail();
+        return base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken);
+    }
+
+    // The triggers in the database are the real guard; this fails earlier with a clearer message.
+    private void GuardAuditTrail()
+    {
+        if (ChangeTracker.Entries<AuditEntry>().Any(e => e.State is EntityState.Modified or EntityState.Deleted))
+            throw new InvalidOperationException("The audit trail is append-only.");
+    }
+}

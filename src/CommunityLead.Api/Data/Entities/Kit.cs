@@ -1,0 +1,23 @@
+using CommunityLead.Rules.Kits;
+
+namespace CommunityLead.Api.Data.Entities;
+
+public class Kit
+{
+    public int Id { get; set; }
+    public required string Code { get; set; }
+    public KitKind Kind { get; set; }
+    public KitState State { get; set; }
+    public Guid HouseholdId { get; set; }
+    public Household? Household { get; set; }
+    public DateTime IssuedAtUtc { get; set; }
+    public DateTime UpdatedAtUtc { get; set; }
+    public DateTimeOffset? ReceivedAt { get; set; }
+    /// <summary>Why the kit was cancelled, lost or rejected.</summary>
+    public string? StateReason { get; set; }
+    public string? ReplacesCode { get; set; }
+    public string? ReplacedByCode { get; set; }
+    /// <summary>Bumped on every change so two people moving the same kit at once can't both win.</summary>
+    public int Version { get; set; }
+    public List<Collection> Collections { get; set; } = [];
+}

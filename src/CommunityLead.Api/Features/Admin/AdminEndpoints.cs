@@ -1,0 +1,46 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Infrastructure;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Features.Admin;
+
+public sealed record KeyListing(string Label, string Role, DateTime CreatedAt, DateTime? RevokedAt);
+
+public sealed record AuditListing(
+    long Id, DateTime At, string Actor, string Role, string Subject, string SubjectKey, string Action,
+    string? From, string? To, string? Reason, string? Detail);
+
+public sealed record AuditPage(IReadOnlyList<AuditListing> Items, long? NextAfterId);
+
+public static class AdminEndpoints
+{
+    // GET /api/admin/keys                      every key's label, role and dates (never a secret)
+    // GET /api/admin/audit?subject=&after=     the whole audit trail, oldest first, in pages
+    public static void MapAdmin(this IEndpointRouteBuilder app)
+    {
+        var group = app.MapGroup("/api/admin").WithTags("Admin")
+            .RequireAuthorization(Policies.Admin).AddEndpointFilter<ValidationFilter>();
+        group.MapGet("/keys", ListKeys);
+        group.MapGet("/audit", ReadAudit);
+    }
+
+    public static async Task<Ok<List<KeyListing>>> ListKeys(CommunityLeadDb db, CancellationToken ct) =>
+        TypedResults.Ok(await db.ApiKeys.AsNoTracking().OrderBy(k => k.Id)
+            .Select(k => new KeyListing(k.Label, k.Role, k.CreatedAtUtc, k.RevokedAtUtc)).ToListAsync(ct));
+
+    /// <summary>Keyset paging on the entry id: stable while new entries keep arriving.</summary>
+    public static async Task<Results<Ok<AuditPage>, ValidationProblem>> ReadAudit(
+        CommunityLeadDb db, CancellationToken ct, string? subject = null, long after = 0, int pageSize = 100)
+    {
+        if (pageSize is < 1 or > 500) return Problems.Field("pageSize", "Use a page size from 1 to 500.");
+        var query = db.AuditTrail.AsNoTracking().Where(a => a.Id > after);
+        if (subject is not null) query = query.Where(a => a.Subject == subject);
+        var items = await query.OrderBy(a => a.Id).Take(pageSize)
+            .Select(a => new AuditListing(a.Id, a.AtUtc, a.ActorLabel, a.ActorRole, a.Subject, a.SubjectKey, a.Action,
+                a.FromState, a.ToState, a.Reason, a.Detail))
+            .ToListAsync(ct);
+        return TypedResults.Ok(new AuditPage(items, items.Count == pageSize ? items[^1].Id : null));
+    }
+}

@@ -1,0 +1,63 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Infrastructure;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Features.Households;
+
+public static class HouseholdEndpoints
+{
+    // POST /api/households        sign a household up
+    // GET  /api/households/{id}   read it, with its kits
+    // PUT  /api/households/{id}   replace its details
+    public static void MapHouseholds(this IEndpointRouteBuilder app)
+    {
+        var group = app.MapGroup("/api/households").WithTags("Households")
+            .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>();
+        group.MapPost("/", SignUp);
+        group.MapGet("/{id:guid}", Get);
+        group.MapPut("/{id:guid}", Update);
+    }
+
+    public static async Task<Created<HouseholdCreated>> SignUp(
+        HouseholdRequest request, CommunityLeadDb db, TimeProvider clock, HttpContext http)
+    {
+        var now = clock.GetUtcNow().UtcDateTime;
+        var household = HouseholdMapping.NewHousehold(request, now);
+        db.Households.Add(household);
+        db.AuditTrail.Add(Audit.Household(Actor.From(http.User), now, household.Id, "sign-up"));
+        await db.SaveChangesAsync();
+        return TypedResults.Created($"/api/households/{household.Id}", new HouseholdCreated(household.Id));
+    }
+
+    public static async Task<Results<Ok<HouseholdResponse>, ProblemHttpResult>> Get(Guid id, CommunityLeadDb db)
+    {
+        var household = await db.Households.AsNoTracking().Where(h => h.Id == id).Select(h => new HouseholdResponse(
+                h.Id, h.Name,
+                new AddressResponse(h.Address.Line1, h.Address.Line2, h.Address.City, h.Address.Region, h.Address.PostalCode),
+                h.Phone, h.Email, h.Language, h.ConsentVersion, h.ConsentGivenAt, h.AreaCode, h.WaterSource,
+                h.YearBuilt, h.ServiceLine, h.ChildUnder6, h.Pregnant, h.FilterInUse, h.CreatedAtUtc, h.UpdatedAtUtc,
+                h.Kits.OrderBy(k => k.IssuedAtUtc).Select(k => new HouseholdKit(k.Code, k.Kind, k.State, k.IssuedAtUtc)).ToList()))
+            .SingleOrDefaultAsync();
+        return household is null ? Problems.HouseholdNotFound(id) : TypedResults.Ok(household);
+    }
+
+    public static async Task<Results<NoContent, ProblemHttpResult>> Update(
+        Guid id, HouseholdRequest request, CommunityLeadDb db, TimeProvider clock, HttpContext http)
+    {
+        var household = await db.Households.SingleOrDefaultAsync(h => h.Id == id);
+        if (household is null) return Problems.HouseholdNotFound(id);
+        var changed = household.Apply(request);
+        if (changed.Count > 0)
+        {
+            var now = clock.GetUtcNow().UtcDateTime;
+            household.UpdatedAtUtc = now;
+            // Field names only: the trail must not become a second copy of personal data.
+            db.AuditTrail.Add(Audit.Household(Actor.From(http.User), now, id, "update", $"changed: {string.Join(", ", changed)}"));
+            await db.SaveChangesAsync();
+        }
+        return TypedResults.NoContent();
+    }
+}

@@ -1,0 +1,48 @@
+using FluentValidation;
+
+namespace CommunityLead.Api.Features.Households;
+
+public sealed class HouseholdValidator : AbstractValidator<HouseholdRequest>
+{
+    // At least seven digits, with the separators people actually type.
+    private const string PhonePattern = @"^\+?[0-9][0-9 ().\-]{5,23}[0-9]$";
+    private const string EmailPattern = @"^[^@\s]+@[^@\s]+\.[^@\s]+$";
+    private const string AreaCodePattern = "^[A-Za-z0-9][A-Za-z0-9-]{0,39}$";
+    private static readonly DateTimeOffset Earliest = new(2000, 1, 1, 0, 0, 0, TimeSpan.Zero);
+
+    public HouseholdValidator(TimeProvider clock)
+    {
+        RuleFor(h => h.Name).NotEmpty().MaximumLength(200);
+        RuleFor(h => h.Address).NotNull().SetValidator(new AddressValidator()!);
+        RuleFor(h => h.Phone).MaximumLength(40).Matches(PhonePattern)
+            .WithMessage("Use digits, with spaces, dashes, dots or brackets if you like, e.g. +1 555 0107.");
+        RuleFor(h => h.Email).MaximumLength(254).Matches(EmailPattern).WithMessage("This does not look like an email address.");
+        RuleFor(h => h.Language).NotNull();
+        RuleFor(h => h.ConsentVersion).NotEmpty().MaximumLength(50);
+        RuleFor(h => h.ConsentGivenAt).NotNull()
+            .GreaterThanOrEqualTo(Earliest).WithMessage("Consent cannot be dated before 2000.")
+            .Must(at => at <= clock.GetUtcNow().AddMinutes(15)).WithMessage("Consent cannot be dated in the future.");
+        RuleFor(h => h.AreaCode).NotEmpty().Matches(AreaCodePattern)
+            .WithMessage("Use 1 to 40 letters, digits or dashes, like 'harbour' or 'north-3'.");
+        RuleFor(h => h.WaterSource).NotNull();
+        RuleFor(h => h.YearBuilt)
+            .GreaterThanOrEqualTo(1700).WithMessage("A year built before 1700 is almost certainly a typo.")
+            .Must(y => y is null || y <= clock.GetUtcNow().Year).WithMessage("The year built cannot be in the future.");
+        RuleFor(h => h.ServiceLine).NotNull();
+        RuleFor(h => h.ChildUnder6).NotNull().WithMessage("Say whether a child under 6 lives or stays often in the home.");
+        RuleFor(h => h.Pregnant).NotNull().WithMessage("Say whether anyone in the home is pregnant.");
+        RuleFor(h => h.FilterInUse).NotNull();
+    }
+}
+
+public sealed class AddressValidator : AbstractValidator<AddressRequest>
+{
+    public AddressValidator()
+    {
+        RuleFor(a => a.Line1).NotEmpty().MaximumLength(200);
+        RuleFor(a => a.Line2).MaximumLength(200);
+        RuleFor(a => a.City).NotEmpty().MaximumLength(100);
+        RuleFor(a => a.Region).MaximumLength(100);
+        RuleFor(a => a.PostalCode).NotEmpty().MaximumLength(20);
+    }
+}

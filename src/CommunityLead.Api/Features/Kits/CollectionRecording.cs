@@ -1,0 +1,73 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Kits;
+using CommunityLead.Rules.Sampling;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Options;
+
+namespace CommunityLead.Api.Features.Kits;
+
+/// <summary>
+/// Records the bottles as the household wrote them down. Problems the household could not see (too short
+/// a standing time, a flushed bottle taken first…) become flags on the kit; the data is always kept.
+/// </summary>
+public static class CollectionRecording
+{
+    public static async Task<Results<Ok<KitResponse>, ValidationProblem, ProblemHttpResult>> Record(
+        string code, CollectionRequest request, CommunityLeadDb db, TimeProvider clock, IOptions<SamplingLimits> limits,
+        HttpContext http, CancellationToken ct)
+    {
+        var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
+        if (invalid is not null) return invalid;
+        if (kit is null) return missing!;
+        var samples = request.Samples!;
+        if (WrongBottles(kit.Kind, samples) is { Count: > 0 } wrong) return Problems.Fields(wrong);
+
+        var now = clock.GetUtcNow();
+        var entries = samples.Select(s => new SampleEntry(s.Bottle!.Value, s.Position, s.Location, s.CollectedAt!.Value,
+            s.WaterLastUsedAt, s.FlushSeconds)).ToList();
+        var review = CollectionCheck.Review(kit.Kind, entries, now, limits.Value);
+
+        var actor = Actor.From(http.User);
+        var detail = review.Flags.Count == 0
+            ? $"{samples.Count} samples, no flags"
+            : $"{samples.Count} samples; flags: {string.Join(", ", review.Flags.Select(f => KebabEnum.Name(f.Code)).Distinct())}";
+        if (KitTransitions.Apply(db, kit, KitAction.RecordCollection, actor, now.UtcDateTime, detail: detail) is { } illegal)
+            return illegal;
+
+        // A new recording supersedes the previous one; both stay in the database.
+        await db.Collections.Where(c => c.KitId == kit.Id && c.SupersededAtUtc == null)
+            .ForEachAsync(c => c.SupersededAtUtc = now.UtcDateTime, ct);
+        db.Collections.Add(new Collection
+        {
+            KitId = kit.Id,
+            RecordedAtUtc = now.UtcDateTime,
+            RecordedBy = actor.Label,
+            Samples = [.. samples.Select((s, i) => new Sample
+            {
+                Index = i, Bottle = s.Bottle!.Value, Position = s.Position, Location = s.Location, VolumeMl = s.VolumeMl,
+                CollectedAt = s.CollectedAt!.Value, CollectedAtUtc = s.CollectedAt.Value.UtcDateTime,
+                WaterLastUsedAt = s.WaterLastUsedAt, FlushSeconds = s.FlushSeconds, Tap = s.Tap?.Trim(),
+                StandingMinutes = review.StandingTimes[i] is { } t ? (int)Math.Round(t.TotalMinutes) : null,
+            })],
+            Flags = [.. review.Flags.Select(f => new KitFlag
+            {
+                Code = f.Code, Severity = f.Severity, SampleIndex = f.SampleIndex, Message = f.Message,
+            })],
+        });
+        return await KitMoves.SaveAndReadAsync(db, kit.Code, actor, ct);
+    }
+
+    private static Dictionary<string, string[]> WrongBottles(KitKind kind, IReadOnlyList<SampleRequest> samples)
+    {
+        var errors = new Dictionary<string, string[]>();
+        for (var i = 0; i < samples.Count; i++)
+            if (!Bottles.FitsKit(kind, samples[i].Bottle!.Value))
+                errors[$"samples[{i}].bottle"] =
+                    [$"A {KebabEnum.Name(kind)} kit has no {KebabEnum.Name(samples[i].Bottle!.Value)} bottle."];
+        return errors;
+    }
+}

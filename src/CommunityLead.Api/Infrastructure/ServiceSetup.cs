@@ -1,0 +1,32 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Rules.Sampling;
+using FluentValidation;
+using Microsoft.AspNetCore.Authentication;
+using Microsoft.AspNetCore.Http.Json;
+
+namespace CommunityLead.Api.Infrastructure;
+
+public static class ServiceSetup
+{
+    public static void AddCommunityLead(this WebApplicationBuilder builder)
+    {
+        var services = builder.Services;
+        services.AddCommunityLeadStorage(builder.Configuration);
+        services.AddSingleton(TimeProvider.System);
+        services.Configure<SamplingLimits>(builder.Configuration.GetSection("Sampling"));
+        services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
+        // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
+        services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);
+        services.AddProblemDetails();
+        services.AddExceptionHandler<BadRequestExceptionHandler>();
+        services.AddValidatorsFromAssemblyContaining<Program>(ServiceLifetime.Singleton);
+
+        services.AddScoped<ApiKeyService>();
+        services.AddAuthentication(ApiKeyAuthenticationHandler.SchemeName)
+            .AddScheme<AuthenticationSchemeOptions, ApiKeyAuthenticationHandler>(ApiKeyAuthenticationHandler.SchemeName, null);
+        services.AddAuthorization(Policies.Add);
+
+        services.AddEndpointsApiExplorer();
+        services.AddCommunityLeadSwagger();
+    }
+}
