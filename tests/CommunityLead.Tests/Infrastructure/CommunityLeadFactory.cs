@@ -1,0 +1,71 @@
+using System.Net.Http.Headers;
+using CommunityLead.Api.Auth;
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Mvc.Testing;
+using Microsoft.Data.Sqlite;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.DependencyInjection.Extensions;
+
+namespace CommunityLead.Tests.Infrastructure;
+
+/// <summary>
+/// The real app on a real SQLite file of its own: one factory per test, never a shared database.
+/// <see cref="CreateClient(string)"/> signs in as a role with a freshly made key.
+/// </summary>
+public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
+{
+    private readonly string folder = Path.Combine(Path.GetTempPath(), "cl-tests", Guid.NewGuid().ToString("N"));
+
+    public CommunityLeadFactory(DateTimeOffset? now = null) =>
+        Clock = new TestClock(now ?? new DateTimeOffset(2026, 4, 10, 12, 0, 0, TimeSpan.Zero));
+
+    public TestClock Clock { get; }
+    public string DatabaseFile => Path.Combine(folder, "test.db");
+    public string ConnectionString => $"Data Source={DatabaseFile}";
+
+    protected override void ConfigureWebHost(IWebHostBuilder builder)
+    {
+        Directory.CreateDirectory(folder);
+        builder.UseEnvironment("Testing");
+        builder.UseSetting("ConnectionStrings:CommunityLead", ConnectionString);
+        builder.ConfigureServices(services =>
+        {
+            services.RemoveAll<TimeProvider>();
+            services.AddSingleton<TimeProvider>(Clock);
+        });
+    }
+
+    public HttpClient CreateClient(string role)
+    {
+        var client = CreateClient();
+        client.DefaultRequestHeaders.Authorization = new AuthenticationHeaderValue("Bearer", CreateKey(role));
+        return client;
+    }
+
+    public string CreateKey(string role, string? label = null)
+    {
+        using var scope = Services.CreateScope();
+        var keys = scope.ServiceProvider.GetRequiredService<ApiKeyService>();
+        return keys.CreateAsync(role, label ?? $"{role}-{Guid.NewGuid():N}").GetAwaiter().GetResult().Key;
+    }
+
+    public T WithDb<T>(Func<CommunityLead.Api.Data.CommunityLeadDb, T> read)
+    {
+        using var scope = Services.CreateScope();
+        return read(scope.ServiceProvider.GetRequiredService<CommunityLead.Api.Data.CommunityLeadDb>());
+    }
+
+    protected override void Dispose(bool disposing)
+    {
+        base.Dispose(disposing);
+        SqliteConnection.ClearAllPools();
+        try { Directory.Delete(folder, recursive: true); } catch (IOException) { }
+    }
+}
+
+/// <summary>A clock the test sets, so "now" and "in the future" don't depend on when the suite runs.</summary>
+public sealed class TestClock(DateTimeOffset now) : TimeProvider
+{
+    public DateTimeOffset Now { get; set; } = now;
+    public override DateTimeOffset GetUtcNow() => Now.ToUniversalTime();
+}
