@@ -1,9 +1,136 @@
+using System.Text.Json;
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Households;
+using CommunityLead.Api.Features.Kits;
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Kits;
+using CommunityLead.Rules.Sampling;
+using FluentValidation;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Options;
+
 namespace CommunityLead.Api.Demo;
 
 public sealed record DemoLoadResult(int NewHouseholds, int NewKits, int SkippedHouseholds);
 
+/// <summary>
+/// Loads the invented demo scenario through the same validators, lifecycle and collection review as the API,
+/// so the demo shows exactly what real use would. Households already present (by id) are skipped.
+/// </summary>
 public static class DemoLoader
 {
-    public static Task<DemoLoadResult?> LoadAsync(IServiceProvider services, TextWriter error) =>
-        Task.FromResult<DemoLoadResult?>(null);
+    private static readonly Actor Loader = new("demo-loader", Roles.Coordinator);
+
+    public static async Task<DemoLoadResult?> LoadAsync(IServiceProvider services, TextWriter error)
+    {
+        var file = FindScenarioFile(services.GetRequiredService<IConfiguration>());
+        if (file is null)
+        {
+            error.WriteLine("seed-data/demo.json was not found next to the program or above the working directory.");
+            return null;
+        }
+        var json = new JsonSerializerOptions(JsonSerializerDefaults.Web);
+        JsonSetup.Configure(json);
+        DemoScenario scenario;
+        await using (var stream = File.OpenRead(file))
+            scenario = (await JsonSerializer.DeserializeAsync<DemoScenario>(stream, json))!;
+
+        await using var scope = services.CreateAsyncScope();
+        var db = scope.ServiceProvider.GetRequiredService<CommunityLeadDb>();
+        var validator = scope.ServiceProvider.GetRequiredService<IValidator<HouseholdRequest>>();
+        var collectionValidator = scope.ServiceProvider.GetRequiredService<IValidator<CollectionRequest>>();
+        var limits = scope.ServiceProvider.GetRequiredService<IOptions<SamplingLimits>>().Value;
+        var existing = (await db.Households.Select(h => h.Id).ToListAsync()).ToHashSet();
+        int newHouseholds = 0, newKits = 0;
+        foreach (var entry in scenario.Households)
+        {
+            if (existing.Contains(entry.Id)) continue;
+            var check = await validator.ValidateAsync(entry.Household);
+            if (!check.IsValid)
+            {
+                error.WriteLine($"{file}: household {entry.Id}: {string.Join("; ", check.Errors.Select(e => $"{e.PropertyName}: {e.ErrorMessage}"))}");
+                return null;
+            }
+            var badCollection = entry.Kits.Where(k => k.Collection is not null)
+                .Select(k => (k.Code, Result: collectionValidator.Validate(new CollectionRequest(k.Collection!.Samples))))
+                .FirstOrDefault(r => !r.Result.IsValid);
+            if (badCollection.Result is not null)
+            {
+                error.WriteLine($"{file}: kit {badCollection.Code}: {string.Join("; ", badCollection.Result.Errors.Select(e => $"{e.PropertyName}: {e.ErrorMessage}"))}");
+                return null;
+            }
+            var household = HouseholdMapping.NewHousehold(entry.Household, entry.Household.ConsentGivenAt!.Value.UtcDateTime);
+            household.Id = entry.Id;
+            db.Households.Add(household);
+            db.AuditTrail.Add(Audit.Household(Loader, household.CreatedAtUtc, household.Id, "sign-up", "demo scenario"));
+            var kits = new Dictionary<string, Kit>();
+            foreach (var demoKit in entry.Kits)
+            {
+                kits[demoKit.Code] = AddKit(db, household.Id, demoKit, kits, limits);
+                newKits++;
+            }
+            newHouseholds++;
+        }
+        await db.SaveChangesAsync();
+        return new DemoLoadResult(newHouseholds, newKits, scenario.Households.Count - newHouseholds);
+    }
+
+    private static Kit AddKit(CommunityLeadDb db, Guid householdId, DemoKit d, Dictionary<string, Kit> earlier, SamplingLimits limits)
+    {
+        var issued = d.IssuedAt.UtcDateTime;
+        var kit = new Kit
+        {
+            Code = KitCode.Parse(d.Code).Code ?? throw new InvalidDataException($"Demo kit code {d.Code} fails its check character."),
+            Kind = d.Kind, State = KitState.Issued, HouseholdId = householdId,
+            IssuedAtUtc = issued, UpdatedAtUtc = issued, ReplacesCode = d.Replaces,
+        };
+        db.Kits.Add(kit);
+        db.AuditTrail.Add(Audit.Kit(Loader, issued, kit.Code, "issue", to: KebabEnum.Name(KitState.Issued), detail: "demo scenario"));
+        if (d.Replaces is not null && earlier.TryGetValue(d.Replaces, out var old))
+        {
+            Move(db, old, KitAction.Replace, issued, null, $"replacement {kit.Code}");
+            old.ReplacedByCode = kit.Code;
+        }
+        if (d.Collection is { } c)
+        {
+            var review = CollectionRecording.Review(kit.Kind, c.Samples, c.RecordedAt, limits);
+            Move(db, kit, KitAction.RecordCollection, c.RecordedAt.UtcDateTime, null, CollectionRecording.Describe(c.Samples.Count, review));
+            kit.Collections.Add(CollectionRecording.NewCollection(0, c.Samples, review, c.RecordedAt.UtcDateTime, Loader.Label));
+        }
+        if (d.ReceivedAt is { } received)
+        {
+            Move(db, kit, KitAction.Receive, received.UtcDateTime, null, null);
+            kit.ReceivedAt = received;
+        }
+        if (d.Then is { } then)
+        {
+            var action = KebabEnum.TryParse<KitAction>(then.Action, out var a) ? a
+                : then.Action == "lost" ? KitAction.MarkLost
+                : throw new InvalidDataException($"Demo kit {d.Code}: unknown final move '{then.Action}'.");
+            Move(db, kit, action, (d.ReceivedAt ?? d.Collection?.RecordedAt ?? d.IssuedAt).AddDays(1).UtcDateTime, then.Reason, null);
+        }
+        return kit;
+    }
+
+    private static void Move(CommunityLeadDb db, Kit kit, KitAction action, DateTime atUtc, string? reason, string? detail)
+    {
+        if (KitTransitions.Apply(db, kit, action, Loader, atUtc, reason, detail) is not null)
+            throw new InvalidDataException($"Demo kit {kit.Code}: '{KebabEnum.Name(action)}' is not allowed from {KebabEnum.Name(kit.State)}.");
+    }
+
+    /// <summary>Demo:File if set; else seed-data/demo.json beside the program (published) or above the working directory.</summary>
+    private static string? FindScenarioFile(IConfiguration configuration)
+    {
+        if (configuration["Demo:File"] is { Length: > 0 } configured) return File.Exists(configured) ? configured : null;
+        var beside = Path.Combine(AppContext.BaseDirectory, "seed-data", "demo.json");
+        if (File.Exists(beside)) return beside;
+        for (var dir = new DirectoryInfo(Directory.GetCurrentDirectory()); dir is not null; dir = dir.Parent)
+        {
+            var candidate = Path.Combine(dir.FullName, "seed-data", "demo.json");
+            if (File.Exists(candidate)) return candidate;
+        }
+        return null;
+    }
 }

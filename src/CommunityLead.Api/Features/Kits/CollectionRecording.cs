@@ -27,41 +27,49 @@ public static class CollectionRecording
         if (WrongBottles(kit.Kind, samples) is { Count: > 0 } wrong) return Problems.Fields(wrong);
 
         var now = clock.GetUtcNow();
-        var entries = samples.Select(s => new SampleEntry(s.Bottle!.Value, s.Position, s.Location, s.CollectedAt!.Value,
-            s.WaterLastUsedAt, s.FlushSeconds)).ToList();
-        var review = CollectionCheck.Review(kit.Kind, entries, now, limits.Value);
-
+        var review = Review(kit.Kind, samples, now, limits.Value);
         var actor = Actor.From(http.User);
-        var detail = review.Flags.Count == 0
-            ? $"{samples.Count} samples, no flags"
-            : $"{samples.Count} samples; flags: {string.Join(", ", review.Flags.Select(f => KebabEnum.Name(f.Code)).Distinct())}";
-        if (KitTransitions.Apply(db, kit, KitAction.RecordCollection, actor, now.UtcDateTime, detail: detail) is { } illegal)
+        if (KitTransitions.Apply(db, kit, KitAction.RecordCollection, actor, now.UtcDateTime, detail: Describe(samples.Count, review)) is { } illegal)
             return illegal;
 
-        // A new recording supersedes the previous one; both stay in the database.
-        await db.Collections.Where(c => c.KitId == kit.Id && c.SupersededAtUtc == null)
-            .ForEachAsync(c => c.SupersededAtUtc = now.UtcDateTime, ct);
-        db.Collections.Add(new Collection
-        {
-            KitId = kit.Id,
-            RecordedAtUtc = now.UtcDateTime,
-            RecordedBy = actor.Label,
-            Samples = [.. samples.Select((s, i) => new Sample
-            {
-                Index = i, Bottle = s.Bottle!.Value, Position = s.Position, Location = s.Location, VolumeMl = s.VolumeMl,
-                CollectedAt = s.CollectedAt!.Value, CollectedAtUtc = s.CollectedAt.Value.UtcDateTime,
-                WaterLastUsedAt = s.WaterLastUsedAt, FlushSeconds = s.FlushSeconds, Tap = s.Tap?.Trim(),
-                StandingMinutes = review.StandingTimes[i] is { } t ? (int)Math.Round(t.TotalMinutes) : null,
-            })],
-            Flags = [.. review.Flags.Select(f => new KitFlag
-            {
-                Code = f.Code, Severity = f.Severity, SampleIndex = f.SampleIndex, Message = f.Message,
-            })],
-        });
+        await SupersedeAsync(db, kit.Id, now.UtcDateTime, ct);
+        db.Collections.Add(NewCollection(kit.Id, samples, review, now.UtcDateTime, actor.Label));
         return await KitMoves.SaveAndReadAsync(db, kit.Code, actor, ct);
     }
 
-    private static Dictionary<string, string[]> WrongBottles(KitKind kind, IReadOnlyList<SampleRequest> samples)
+    /// <summary>A new recording supersedes the previous one; both stay in the database.</summary>
+    internal static Task SupersedeAsync(CommunityLeadDb db, int kitId, DateTime nowUtc, CancellationToken ct) =>
+        db.Collections.Where(c => c.KitId == kitId && c.SupersededAtUtc == null)
+            .ForEachAsync(c => c.SupersededAtUtc = nowUtc, ct);
+
+    internal static CollectionReview Review(KitKind kind, IReadOnlyList<SampleRequest> samples, DateTimeOffset recordedAt, SamplingLimits limits) =>
+        CollectionCheck.Review(kind, [.. samples.Select(s => new SampleEntry(s.Bottle!.Value, s.Position, s.Location,
+            s.CollectedAt!.Value, s.WaterLastUsedAt, s.FlushSeconds))], recordedAt, limits);
+
+    internal static string Describe(int sampleCount, CollectionReview review) => review.Flags.Count == 0
+        ? $"{sampleCount} samples, no flags"
+        : $"{sampleCount} samples; flags: {string.Join(", ", review.Flags.Select(f => KebabEnum.Name(f.Code)).Distinct())}";
+
+    internal static Collection NewCollection(int kitId, IReadOnlyList<SampleRequest> samples, CollectionReview review,
+        DateTime recordedAtUtc, string recordedBy) => new()
+    {
+        KitId = kitId,
+        RecordedAtUtc = recordedAtUtc,
+        RecordedBy = recordedBy,
+        Samples = [.. samples.Select((s, i) => new Sample
+        {
+            Index = i, Bottle = s.Bottle!.Value, Position = s.Position, Location = s.Location, VolumeMl = s.VolumeMl,
+            CollectedAt = s.CollectedAt!.Value, CollectedAtUtc = s.CollectedAt.Value.UtcDateTime,
+            WaterLastUsedAt = s.WaterLastUsedAt, FlushSeconds = s.FlushSeconds, Tap = s.Tap?.Trim(),
+            StandingMinutes = review.StandingTimes[i] is { } t ? (int)Math.Round(t.TotalMinutes) : null,
+        })],
+        Flags = [.. review.Flags.Select(f => new KitFlag
+        {
+            Code = f.Code, Severity = f.Severity, SampleIndex = f.SampleIndex, Message = f.Message,
+        })],
+    };
+
+    internal static Dictionary<string, string[]> WrongBottles(KitKind kind, IReadOnlyList<SampleRequest> samples)
     {
         var errors = new Dictionary<string, string[]>();
         for (var i = 0; i < samples.Count; i++)
