@@ -21,7 +21,8 @@ public static class AdminEndpoints
     public static void MapAdmin(this IEndpointRouteBuilder app)
     {
         var group = app.MapGroup("/api/admin").WithTags("Admin")
-            .RequireAuthorization(Policies.Admin).AddEndpointFilter<ValidationFilter>();
+            .RequireAuthorization(Policies.Admin).AddEndpointFilter<ValidationFilter>()
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         group.MapGet("/keys", ListKeys);
         group.MapGet("/audit", ReadAudit);
     }

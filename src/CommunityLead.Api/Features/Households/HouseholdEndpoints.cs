@@ -15,7 +15,9 @@ public static class HouseholdEndpoints
     public static void MapHouseholds(this IEndpointRouteBuilder app)
     {
         var group = app.MapGroup("/api/households").WithTags("Households")
-            .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>();
+            .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
+            .ProducesProblem(StatusCodes.Status404NotFound);
         group.MapPost("/", SignUp);
         group.MapGet("/{id:guid}", Get);
         group.MapPut("/{id:guid}", Update);

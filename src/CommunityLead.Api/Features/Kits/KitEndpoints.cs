@@ -15,7 +15,9 @@ public static class KitEndpoints
     // POST /api/kits/{code}/close           done after the letter               coordinator
     public static void MapKits(this IEndpointRouteBuilder app)
     {
-        var kits = app.MapGroup("/api/kits").WithTags("Kits").AddEndpointFilter<ValidationFilter>();
+        var kits = app.MapGroup("/api/kits").WithTags("Kits").AddEndpointFilter<ValidationFilter>()
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
+            .ProducesProblem(StatusCodes.Status404NotFound).ProducesProblem(StatusCodes.Status409Conflict);
 
         var coordinator = kits.MapGroup("").RequireAuthorization(Policies.Coordinator);
         coordinator.MapPost("/", KitMoves.Issue);

@@ -1,0 +1,89 @@
+using System.Net;
+using CommunityLead.Api.Commands;
+using CommunityLead.Tests.Infrastructure;
+using Microsoft.Data.Sqlite;
+
+namespace CommunityLead.Tests.Commands;
+
+public class CommandTests
+{
+    private static async Task<(int Exit, string Out, string Err)> RunAsync(CommunityLeadFactory app, params string[] args)
+    {
+        var command = CommandLine.Find(args) ?? throw new InvalidOperationException($"no command {args[0]}");
+        using var output = new StringWriter();
+        using var error = new StringWriter();
+        var exit = await command.RunAsync(app.Services, output, error);
+        return (exit, output.ToString(), error.ToString());
+    }
+
+    [Fact]
+    public async Task KeysCreate_PrintsTheKeyAsLastLine_AndItSignsIn()
+    {
+        using var app = new CommunityLeadFactory();
+        var (exit, output, _) = await RunAsync(app, "keys", "create", "--role", "coordinator", "--label", "front-desk");
+        Assert.Equal(0, exit);
+        var key = output.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)[^1];
+        var client = app.CreateClient();
+        client.DefaultRequestHeaders.Authorization = new("Bearer", key);
+        Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/kits")).StatusCode);
+
+        var (_, listing, _) = await RunAsync(app, "keys", "list");
+        Assert.Contains("front-desk", listing);
+        Assert.DoesNotContain(key.Split('_')[2], listing);
+
+        Assert.Equal(0, (await RunAsync(app, "keys", "revoke", "front-desk")).Exit);
+        Assert.Equal(HttpStatusCode.Unauthorized, (await client.GetAsync("/api/kits")).StatusCode);
+    }
+
+    [Theory]
+    [InlineData("keys", "create", "--role", "janitor", "--label", "x")]
+    [InlineData("keys", "create", "--label", "no-role")]
+    [InlineData("keys", "revoke", "nobody")]
+    [InlineData("keys")]
+    [InlineData("backup")]
+    public async Task Commands_BadArguments_ExplainOnStandardErrorWithNonZeroExit(params string[] args)
+    {
+        using var app = new CommunityLeadFactory();
+        var (exit, output, error) = await RunAsync(app, args);
+        Assert.NotEqual(0, exit);
+        Assert.NotEmpty(error.Trim());
+        Assert.Empty(output.Trim());
+    }
+
+    [Fact]
+    public async Task Demo_LoadedTwice_AddsNothingTheSecondTime()
+    {
+        using var app = new CommunityLeadFactory();
+        var first = await RunAsync(app, "demo");
+        Assert.Equal(0, first.Exit);
+        var households = app.WithDb(db => db.Households.Count());
+        var kits = app.WithDb(db => db.Kits.Count());
+        var audit = app.WithDb(db => db.AuditTrail.Count());
+        Assert.True(households >= 10 && kits >= households, $"{households} households, {kits} kits");
+        // The scenario shows kits in several states and at least one flagged collection.
+        Assert.True(app.WithDb(db => db.Kits.Select(k => k.State).Distinct().Count()) >= 5);
+        Assert.True(app.WithDb(db => db.KitFlags.Any()));
+
+        var second = await RunAsync(app, "demo");
+        Assert.Equal(0, second.Exit);
+        Assert.Equal(households, app.WithDb(db => db.Households.Count()));
+        Assert.Equal(kits, app.WithDb(db => db.Kits.Count()));
+        Assert.Equal(audit, app.WithDb(db => db.AuditTrail.Count()));
+    }
+
+    [Fact]
+    public async Task Backup_WritesACopyThatOpensWithTheSameRows()
+    {
+        using var app = new CommunityLeadFactory();
+        await RunAsync(app, "demo");
+        var target = Path.Combine(Path.GetDirectoryName(app.DatabaseFile)!, "copy.db");
+        Assert.Equal(0, (await RunAsync(app, "backup", target)).Exit);
+        await using var copy = new SqliteConnection($"Data Source={target};Mode=ReadOnly");
+        await copy.OpenAsync();
+        await using var count = copy.CreateCommand();
+        count.CommandText = "SELECT count(*) FROM Kits";
+        Assert.Equal((long)app.WithDb(db => db.Kits.Count()), (long)(await count.ExecuteScalarAsync())!);
+        // A second backup never overwrites the first.
+        Assert.NotEqual(0, (await RunAsync(app, "backup", target)).Exit);
+    }
+}
