@@ -6,7 +6,7 @@ namespace CommunityLead.Rules.Kits;
 /// <summary>
 /// Kit codes are typed by people from a label, so they use Crockford's base32 alphabet (no I, L, O, U)
 /// with its mod-37 check symbol: one mistyped or swapped character is caught before any lookup.
-/// Canonical form: four characters, a hyphen, four characters, a hyphen, the check symbol ("7KQ4-M2XD-P").
+/// Canonical form: four characters, a hyphen, four characters, a hyphen, the check symbol ("7KQ4-M2XD-H").
 /// </summary>
 public static class KitCode
 {
@@ -52,7 +52,7 @@ public static class KitCode
         }
         var text = cleaned.ToString();
         if (text.Length != PayloadLength + 1)
-            return KitCodeParse.Malformed($"A kit code has {PayloadLength} characters and a check character, like 7KQ4-M2XD-P.");
+            return KitCodeParse.Malformed($"A kit code has {PayloadLength} characters and a check character, like 7KQ4-M2XD-H.");
         var payload = text[..PayloadLength];
         if (payload.Any(c => !Alphabet.Contains(c)) || !CheckAlphabet.Contains(text[^1]))
             return KitCodeParse.Malformed("This code has characters that never appear in kit codes.");

@@ -1,3 +1,4 @@
+using System.Text.RegularExpressions;
 using CommunityLead.Rules.Kits;
 
 namespace CommunityLead.Tests.Rules.Kits;
@@ -59,6 +60,14 @@ public class KitCodeParseTests
         Assert.False(string.IsNullOrWhiteSpace(parsed.Error));
         Assert.NotEqual(KitCodeParse.MistypedMessage, parsed.Error);
         Assert.DoesNotContain("mistyped", parsed.Error, StringComparison.OrdinalIgnoreCase);
+    }
+
+    [Fact]
+    public void Parse_WrongLength_ExampleInMessageIsItselfValid()
+    {
+        var error = KitCode.Parse("7KQ4").Error!;
+        var example = Regex.Match(error, @"like (\S+)\.$").Groups[1].Value;
+        Assert.True(KitCode.Parse(example).IsValid, $"the example '{example}' shown to people fails its own check");
     }
 
     [Fact]

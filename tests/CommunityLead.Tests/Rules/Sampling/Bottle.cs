@@ -28,8 +28,9 @@ internal static class Bottle
     public static SampleEntry Soil(SoilLocation location, DateTimeOffset collected) =>
         new(BottleType.Soil, null, location, collected, null, null);
 
+    /// <summary>Reviewed with default limits, recorded a day after the last bottle (clock checks pass their own time).</summary>
     public static CollectionReview Review(KitKind kind, params SampleEntry[] samples) =>
-        CollectionCheck.Review(kind, samples, RecordedAt, new SamplingLimits());
+        CollectionCheck.Review(kind, samples, samples.Max(s => s.CollectedAt).AddDays(1), new SamplingLimits());
 
     /// <summary>A water kit with one first-draw bottle, standing the given time.</summary>
     public static CollectionReview StoodFor(TimeSpan standing) =>
