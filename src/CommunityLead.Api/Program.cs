@@ -1,7 +1,9 @@
 using CommunityLead.Api.Commands;
 using CommunityLead.Api.Features.Admin;
+using CommunityLead.Api.Features.Attention;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Kits;
+using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Infrastructure;
 
 var builder = WebApplication.CreateBuilder(args);
@@ -24,6 +26,8 @@ app.UseAuthorization();
 app.MapGet("/health", () => TypedResults.Ok(new HealthStatus("ok"))).AllowAnonymous().WithTags("Health");
 app.MapHouseholds();
 app.MapKits();
+app.MapLabResults();
+app.MapAttention();
 app.MapAdmin();
 
 await app.RunAsync();

@@ -20,6 +20,8 @@ public static class Policies
     public const string Coordinator = "coordinator";
     public const string KitReader = "kit-reader";
     public const string KitReceiver = "kit-receiver";
+    public const string Lab = "lab";
+    public const string LabReader = "lab-reader";
     public const string Admin = "admin";
 
     public static void Add(Microsoft.AspNetCore.Authorization.AuthorizationOptions options)
@@ -27,6 +29,8 @@ public static class Policies
         options.AddPolicy(Coordinator, p => p.RequireRole(Roles.Coordinator));
         options.AddPolicy(KitReader, p => p.RequireRole(Roles.Coordinator, Roles.Lab));
         options.AddPolicy(KitReceiver, p => p.RequireRole(Roles.Coordinator, Roles.Lab));
+        options.AddPolicy(Lab, p => p.RequireRole(Roles.Lab));
+        options.AddPolicy(LabReader, p => p.RequireRole(Roles.Lab, Roles.Coordinator));
         options.AddPolicy(Admin, p => p.RequireRole(Roles.Admin));
         // Nothing is open without a key unless it says so (/health). That every route names its own policy
         // is checked by the role-matrix test, which fails on any route it has no expectation for.

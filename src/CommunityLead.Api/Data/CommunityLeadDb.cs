@@ -16,6 +16,10 @@ public class CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : DbCont
     public DbSet<KitFlag> KitFlags => Set<KitFlag>();
     public DbSet<AuditEntry> AuditTrail => Set<AuditEntry>();
     public DbSet<ApiKey> ApiKeys => Set<ApiKey>();
+    public DbSet<LabBatch> LabBatches => Set<LabBatch>();
+    public DbSet<LabResult> LabResults => Set<LabResult>();
+    public DbSet<LabQcEntry> LabQc => Set<LabQcEntry>();
+    public DbSet<AttentionItem> Attention => Set<AttentionItem>();
 
     protected override void OnModelCreating(ModelBuilder modelBuilder) =>
         modelBuilder.ApplyConfigurationsFromAssembly(typeof(CommunityLeadDb).Assembly);

@@ -12,6 +12,12 @@ public static class Audit
         Subject = "household", SubjectKey = id.ToString(), Action = action, Detail = detail,
     };
 
+    public static AuditEntry Batch(Actor actor, DateTime atUtc, string batchId, string action, string? to, string? reason, string detail) => new()
+    {
+        AtUtc = atUtc, ActorLabel = actor.Label, ActorRole = actor.Role,
+        Subject = "lab-batch", SubjectKey = batchId, Action = action, ToState = to, Reason = reason, Detail = detail,
+    };
+
     public static AuditEntry Kit(Actor actor, DateTime atUtc, string code, string action,
         string? from = null, string? to = null, string? reason = null, string? detail = null) => new()
     {

@@ -15,10 +15,14 @@ public sealed class OffsetRequiredConverter : JsonConverter<DateTimeOffset>
     public override DateTimeOffset Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options)
     {
         var text = reader.TokenType == JsonTokenType.String ? reader.GetString() : null;
-        if (text is null || !HasOffset(text) ||
-            !DateTimeOffset.TryParse(text, CultureInfo.InvariantCulture, DateTimeStyles.None, out var value))
-            throw new JsonException(Message);
-        return value;
+        return text is not null && TryParse(text, out var value) ? value : throw new JsonException(Message);
+    }
+
+    /// <summary>The same rule for text from elsewhere (CSV cells, query strings).</summary>
+    public static bool TryParse(string text, out DateTimeOffset value)
+    {
+        value = default;
+        return HasOffset(text) && DateTimeOffset.TryParse(text, CultureInfo.InvariantCulture, DateTimeStyles.None, out value);
     }
 
     public override void Write(Utf8JsonWriter writer, DateTimeOffset value, JsonSerializerOptions options) =>

@@ -1,4 +1,5 @@
 using CommunityLead.Api.Auth;
+using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Rules.Sampling;
 using FluentValidation;
 using Microsoft.AspNetCore.Authentication;
@@ -14,6 +15,7 @@ public static class ServiceSetup
         services.AddCommunityLeadStorage(builder.Configuration);
         services.AddSingleton(TimeProvider.System);
         services.Configure<SamplingLimits>(builder.Configuration.GetSection("Sampling"));
+        services.Configure<LabIntakeOptions>(builder.Configuration.GetSection("LabIntake"));
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
         // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
         services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);

@@ -50,6 +50,8 @@ public static class KitLifecycle
         },
         [KitState.LetterSent] = new()
         {
+            // A corrected result after the letter: back to analyzed, so it is interpreted and written again.
+            [KitAction.RecordResults] = KitState.Analyzed,
             [KitAction.SendLetter] = KitState.LetterSent,
             [KitAction.Close] = KitState.Closed,
             [KitAction.Replace] = KitState.LetterSent,

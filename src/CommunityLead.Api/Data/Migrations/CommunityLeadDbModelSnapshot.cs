@@ -64,6 +64,45 @@ namespace CommunityLead.Api.Data.Migrations
                     b.ToTable("ApiKeys");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.AttentionItem", b =>
+                {
+                    b.Property<int>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Detail")
+                        .IsRequired()
+                        .HasMaxLength(500)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("KitCode")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("KitId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTime>("RaisedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Reason")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTime?>("ResolvedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("KitId");
+
+                    b.HasIndex("ResolvedAtUtc", "RaisedAtUtc");
+
+                    b.ToTable("Attention");
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.AuditEntry", b =>
                 {
                     b.Property<long>("Id")
@@ -342,6 +381,221 @@ namespace CommunityLead.Api.Data.Migrations
                     b.ToTable("KitFlags");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabBatch", b =>
+                {
+                    b.Property<int>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTimeOffset>("AnalyzedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTime>("AnalyzedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("BatchId")
+                        .IsRequired()
+                        .HasMaxLength(64)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ContentHash")
+                        .IsRequired()
+                        .HasMaxLength(64)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("CorrectionReason")
+                        .HasMaxLength(500)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Format")
+                        .IsRequired()
+                        .HasMaxLength(10)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Method")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTime>("PostedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("PostedBy")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("QcJson")
+                        .IsRequired()
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ReleaseReason")
+                        .HasMaxLength(500)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTime?>("ReleasedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ReleasedBy")
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("ResultCount")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Status")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("Version")
+                        .HasColumnType("INTEGER");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("Status");
+
+                    b.HasIndex("BatchId", "Version")
+                        .IsUnique();
+
+                    b.ToTable("LabBatches");
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabQcEntry", b =>
+                {
+                    b.Property<int>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Analyte")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double?>("Duplicate")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("Expected")
+                        .HasColumnType("REAL");
+
+                    b.Property<int>("LabBatchId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<double?>("Measured")
+                        .HasColumnType("REAL");
+
+                    b.Property<double?>("SpikeAdded")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("Type")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Unit")
+                        .IsRequired()
+                        .HasMaxLength(10)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double?>("Unspiked")
+                        .HasColumnType("REAL");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("LabBatchId");
+
+                    b.ToTable("LabQc");
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabResult", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTimeOffset?>("AcidifiedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Analyte")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Bottle")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset>("CollectedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("HoldingFlags")
+                        .HasMaxLength(1000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("KitCode")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("KitId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<int>("LabBatchId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Location")
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double>("Mdl")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("OriginalUnit")
+                        .IsRequired()
+                        .HasMaxLength(10)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double>("OriginalValue")
+                        .HasColumnType("REAL");
+
+                    b.Property<int?>("Position")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Qualifier")
+                        .HasMaxLength(2)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ReplicatesJson")
+                        .HasMaxLength(2000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double>("ReportingLimit")
+                        .HasColumnType("REAL");
+
+                    b.Property<DateTime?>("SupersededAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<double?>("Uncertainty")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("Unit")
+                        .IsRequired()
+                        .HasMaxLength(10)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double>("Value")
+                        .HasColumnType("REAL");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("LabBatchId");
+
+                    b.HasIndex("KitId", "SupersededAtUtc");
+
+                    b.ToTable("LabResults");
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Sample", b =>
                 {
                     b.Property<int>("Id")
@@ -397,6 +651,15 @@ namespace CommunityLead.Api.Data.Migrations
                     b.ToTable("Samples");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.AttentionItem", b =>
+                {
+                    b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
+                        .WithMany()
+                        .HasForeignKey("KitId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Collection", b =>
                 {
                     b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
@@ -426,6 +689,32 @@ namespace CommunityLead.Api.Data.Migrations
                         .IsRequired();
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabQcEntry", b =>
+                {
+                    b.HasOne("CommunityLead.Api.Data.Entities.LabBatch", null)
+                        .WithMany("Qc")
+                        .HasForeignKey("LabBatchId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabResult", b =>
+                {
+                    b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
+                        .WithMany()
+                        .HasForeignKey("KitId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.HasOne("CommunityLead.Api.Data.Entities.LabBatch", "Batch")
+                        .WithMany("Results")
+                        .HasForeignKey("LabBatchId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.Navigation("Batch");
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Sample", b =>
                 {
                     b.HasOne("CommunityLead.Api.Data.Entities.Collection", null)
@@ -450,6 +739,13 @@ namespace CommunityLead.Api.Data.Migrations
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Kit", b =>
                 {
                     b.Navigation("Collections");
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabBatch", b =>
+                {
+                    b.Navigation("Qc");
+
+                    b.Navigation("Results");
                 });
 #pragma warning restore 612, 618
         }

@@ -1,0 +1,16 @@
+using CommunityLead.Api.Data.Entities;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Metadata.Builders;
+
+namespace CommunityLead.Api.Data.Configurations;
+
+public class AttentionItemConfiguration : IEntityTypeConfiguration<AttentionItem>
+{
+    public void Configure(EntityTypeBuilder<AttentionItem> b)
+    {
+        b.Property(a => a.KitCode).HasMaxLength(16);
+        b.Property(a => a.Detail).HasMaxLength(500);
+        b.HasIndex(a => new { a.ResolvedAtUtc, a.RaisedAtUtc });
+        b.HasOne<Kit>().WithMany().HasForeignKey(a => a.KitId).OnDelete(DeleteBehavior.Restrict);
+    }
+}

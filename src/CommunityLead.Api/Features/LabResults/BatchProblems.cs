@@ -1,0 +1,43 @@
+using Microsoft.AspNetCore.Http.HttpResults;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>The ways a batch is refused, each as problem details the lab's staff can act on.</summary>
+public static class BatchProblems
+{
+    /// <summary>
+    /// 422 with every problem: <c>errors</c> keyed "/results/3/unit" (JSON pointer) or "row 5/unit" (CSV line,
+    /// header = line 1), and the same list as <c>problems</c> with row, field and reason apart.
+    /// </summary>
+    public static ProblemHttpResult Unprocessable(IReadOnlyList<BatchProblem> problems)
+    {
+        var errors = problems.GroupBy(p => p.Key).ToDictionary(g => g.Key, g => g.Select(p => p.Reason).ToArray());
+        return TypedResults.Problem(new HttpValidationProblemDetails(errors)
+        {
+            Status = StatusCodes.Status422UnprocessableEntity,
+            Title = "The batch was refused; nothing was stored.",
+            Detail = $"{problems.Count} problem(s). Fix them and post the whole batch again.",
+            Extensions =
+            {
+                ["problems"] = problems.Select(p => new { row = p.Where.Length == 0 ? null : p.Where, field = p.Field, reason = p.Reason }).ToArray(),
+            },
+        });
+    }
+
+    public static ProblemHttpResult TooLarge(long limit) =>
+        TypedResults.Problem(statusCode: StatusCodes.Status413PayloadTooLarge, title: "The batch is too large.",
+            detail: $"Batches may be up to {limit:N0} bytes (setting LabIntake:MaxBatchBytes). Split it into several batches.");
+
+    public static ProblemHttpResult UnsupportedType() =>
+        TypedResults.Problem(statusCode: StatusCodes.Status415UnsupportedMediaType, title: "Send the batch as application/json or text/csv.");
+
+    public static ProblemHttpResult ChangedContent(string batchId, int version) =>
+        TypedResults.Problem(statusCode: StatusCodes.Status409Conflict, title: "This batch id was already posted with other content.",
+            detail: $"Batch {batchId} version {version} holds different results. To replace them, post it as a correction " +
+                    "(\"correction\": true and a \"correctionReason\"; in CSV, ?correction=true&correctionReason=...).",
+            extensions: new Dictionary<string, object?> { ["batchId"] = batchId, ["currentVersion"] = version });
+
+    public static ProblemHttpResult Raced(string batchId) =>
+        TypedResults.Problem(statusCode: StatusCodes.Status409Conflict, title: "The batch changed while this request was handled.",
+            detail: $"Batch {batchId} or one of its kits was changed by another request at the same moment. Post it again.");
+}

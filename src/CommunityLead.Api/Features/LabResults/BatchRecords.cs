@@ -1,0 +1,50 @@
+using System.Text.Json;
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Rules.LabResults;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>Turns a checked batch into the rows stored for it, with the QC verdict computed here, not taken from the lab.</summary>
+public static class BatchRecords
+{
+    public static LabBatch NewBatch(CheckedBatch batch, int version, string hash, string format, QcWindows windows,
+        Actor actor, DateTime nowUtc, JsonSerializerOptions json)
+    {
+        var sampleCounts = batch.Results.GroupBy(r => r.Analyte).ToDictionary(g => g.Key, g => g.Count());
+        var reportingLimits = batch.Results.GroupBy(r => r.Analyte).ToDictionary(g => g.Key, g => g.Min(r => r.ReportingLimit));
+        var verdict = QcEvaluator.Evaluate([.. batch.Qc.Select(q => q.Sample)], sampleCounts, reportingLimits, windows);
+        return new LabBatch
+        {
+            BatchId = batch.BatchId,
+            Version = version,
+            CorrectionReason = batch.Correction ? batch.CorrectionReason?.Trim() : null,
+            Method = batch.Method.Trim(),
+            AnalyzedAt = batch.AnalyzedAt,
+            AnalyzedAtUtc = batch.AnalyzedAt.UtcDateTime,
+            ContentHash = hash,
+            Format = format,
+            Status = verdict.Passed ? BatchStatus.Accepted : BatchStatus.Held,
+            QcJson = JsonSerializer.Serialize(verdict, json),
+            ResultCount = batch.Results.Count,
+            PostedBy = actor.Label,
+            PostedAtUtc = nowUtc,
+            Results = [.. batch.Results.Select(r => new LabResult
+            {
+                KitId = r.KitId, KitCode = r.KitCode, Bottle = r.Bottle, Position = r.Row.Position, Location = r.Location,
+                Analyte = r.Analyte, Value = r.Value, Unit = r.Unit,
+                OriginalValue = r.Row.Value!.Value, OriginalUnit = r.Row.Unit!.Trim(),
+                Qualifier = r.Row.Qualifier?.Trim().ToUpperInvariant() is { Length: > 0 } q ? q : null,
+                Mdl = r.Mdl, ReportingLimit = r.ReportingLimit, Uncertainty = r.Uncertainty,
+                ReplicatesJson = r.Replicates is null ? null : JsonSerializer.Serialize(r.Replicates),
+                AcidifiedAt = r.Row.AcidifiedAt, CollectedAt = r.CollectedAt,
+                HoldingFlags = r.Holding.Count == 0 ? null : JsonSerializer.Serialize(r.Holding, json),
+            })],
+            Qc = [.. batch.Qc.Select(q => new LabQcEntry
+            {
+                Type = q.Sample.Type, Analyte = q.Sample.Analyte, Expected = q.Sample.Expected, Measured = q.Sample.Measured,
+                Unspiked = q.Sample.Unspiked, SpikeAdded = q.Sample.SpikeAdded, Duplicate = q.Sample.Duplicate, Unit = q.Unit,
+            })],
+        };
+    }
+}

@@ -1,0 +1,58 @@
+using System.Text.Json;
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Infrastructure;
+using FluentValidation;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.AspNetCore.Http.Json;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Options;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>
+/// A coordinator may put a held batch into effect anyway, with a reason (for example, the lab explained the
+/// failed check). Only the latest version can be released; the verdict stays on record as computed.
+/// </summary>
+public static class BatchReleasing
+{
+    public static async Task<Results<Ok<BatchOutcome>, ValidationProblem, ProblemHttpResult>> Release(
+        string batchId, ReleaseRequest request, CommunityLeadDb db, IOptions<JsonOptions> json, TimeProvider clock,
+        HttpContext http, CancellationToken ct)
+    {
+        var batch = await db.LabBatches.Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct);
+        if (batch is null)
+            return TypedResults.Problem(statusCode: 404, title: "No such batch.", detail: $"No batch {batchId} was posted.");
+        if (batch.Status != BatchStatus.Held)
+            return TypedResults.Problem(statusCode: 409, title: "Only a held batch can be released.",
+                detail: $"Batch {batchId} version {batch.Version} is {KebabEnum.Name(batch.Status)}.",
+                extensions: new Dictionary<string, object?> { ["status"] = KebabEnum.Name(batch.Status) });
+
+        var now = clock.GetUtcNow().UtcDateTime;
+        var actor = Actor.From(http.User);
+        batch.Status = BatchStatus.Released;
+        batch.ReleasedAtUtc = now;
+        batch.ReleasedBy = actor.Label;
+        batch.ReleaseReason = request.Reason!.Trim();
+        db.AuditTrail.Add(Audit.Batch(actor, now, batchId, "release", KebabEnum.Name(BatchStatus.Released), batch.ReleaseReason,
+            $"version {batch.Version}"));
+        var results = await db.LabResults.Where(r => r.LabBatchId == batch.Id).ToListAsync(ct);
+        if (await BatchEffects.ApplyAsync(db, batch, results, actor, now, ct) is { } illegal) return illegal;
+        try
+        {
+            await db.SaveChangesAsync(ct);
+        }
+        catch (DbUpdateException)
+        {
+            return BatchProblems.Raced(batchId);
+        }
+        return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, ct));
+    }
+}
+
+public sealed class ReleaseValidator : AbstractValidator<ReleaseRequest>
+{
+    public ReleaseValidator() =>
+        RuleFor(r => r.Reason).NotEmpty().WithMessage("Say why the held results may be used.").MinimumLength(3).MaximumLength(500);
+}

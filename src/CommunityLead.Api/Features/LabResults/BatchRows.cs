@@ -1,0 +1,57 @@
+using System.Text.Json.Serialization;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>
+/// A batch as the lab sent it, JSON or CSV alike. Codes and names stay text here so that every bad cell,
+/// in either format, is reported with its row and field instead of failing the whole parse.
+/// </summary>
+public sealed record BatchRequest(
+    string? BatchId,
+    string? Method,
+    DateTimeOffset? AnalyzedAt,
+    bool? Correction,
+    string? CorrectionReason,
+    IReadOnlyList<ResultRow>? Results,
+    IReadOnlyList<QcRow>? Qc);
+
+public sealed record ResultRow(
+    string? KitCode,
+    string? Bottle,
+    int? Position,
+    string? Location,
+    string? Analyte,
+    double? Value,
+    string? Unit,
+    string? Qualifier,
+    double? Mdl,
+    double? ReportingLimit,
+    double? Uncertainty,
+    IReadOnlyList<double>? Replicates,
+    DateTimeOffset? AcidifiedAt)
+{
+    /// <summary>Where the row came from: a JSON pointer ("/results/3") or a CSV line ("row 5").</summary>
+    [JsonIgnore] public string Where { get; init; } = "";
+}
+
+public sealed record QcRow(
+    string? Type,
+    string? Analyte,
+    double? Expected,
+    double? Measured,
+    double? Unspiked,
+    double? SpikeAdded,
+    double? Duplicate,
+    string? Unit)
+{
+    [JsonIgnore] public string Where { get; init; } = "";
+}
+
+/// <param name="Where">JSON pointer or "row N" (CSV line, header = line 1); empty for the batch itself.</param>
+public sealed record BatchProblem(string Where, string Field, string Reason)
+{
+    /// <summary>The key in the problem's <c>errors</c>: "/results/3/unit", "row 5/unit", or "batchId" for the batch.</summary>
+    public string Key => Where.Length == 0 ? Field : $"{Where}/{Field}";
+}
+
+public sealed record ParsedBatch(BatchRequest Request, string Format, IReadOnlyList<BatchProblem> Problems);

@@ -1,0 +1,28 @@
+using System.Text.Json;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.LabResults;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>Reads stored batches back as the lab and the coordinator see them.</summary>
+public static class BatchViews
+{
+    public static async Task<BatchOutcome> OutcomeAsync(CommunityLeadDb db, LabBatch batch, JsonSerializerOptions json, CancellationToken ct)
+    {
+        var flagged = await db.LabResults.AsNoTracking()
+            .Where(r => r.LabBatchId == batch.Id && r.HoldingFlags != null)
+            .Select(r => new { r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, r.HoldingFlags })
+            .ToListAsync(ct);
+        var flags = flagged.SelectMany(r => Holding(r.HoldingFlags, json).Select(f => new ResultFlag(
+            r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, KebabEnum.Name(f.Code), f.Message))).ToList();
+        return new BatchOutcome(batch.BatchId, batch.Version, batch.Status, batch.Method, batch.AnalyzedAt, batch.ResultCount,
+            JsonSerializer.Deserialize<QcVerdict>(batch.QcJson, json)!, flags, batch.CorrectionReason, batch.PostedAtUtc,
+            batch.PostedBy, batch.ReleasedAtUtc is { } at ? new BatchRelease(at, batch.ReleasedBy!, batch.ReleaseReason!) : null);
+    }
+
+    public static IReadOnlyList<HoldingFlag> Holding(string? stored, JsonSerializerOptions json) =>
+        stored is null ? [] : JsonSerializer.Deserialize<List<HoldingFlag>>(stored, json)!;
+}

@@ -1,0 +1,28 @@
+using CommunityLead.Rules.LabResults;
+using CommunityLead.Rules.Sampling;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>A result that passed every check, normalised to the unit results are stored in.</summary>
+public sealed record CheckedResult(
+    ResultRow Row,
+    int KitId,
+    string KitCode,
+    BottleType Bottle,
+    SoilLocation? Location,
+    Matrix Matrix,
+    Analyte Analyte,
+    double Value,
+    string Unit,
+    double Mdl,
+    double ReportingLimit,
+    double? Uncertainty,
+    IReadOnlyList<double>? Replicates,
+    DateTimeOffset CollectedAt,
+    IReadOnlyList<HoldingFlag> Holding);
+
+public sealed record CheckedQc(QcSample Sample, string Unit);
+
+public sealed record CheckedBatch(
+    string BatchId, string Method, DateTimeOffset AnalyzedAt, bool Correction, string? CorrectionReason,
+    IReadOnlyList<CheckedResult> Results, IReadOnlyList<CheckedQc> Qc);

@@ -1,0 +1,80 @@
+using CsvHelper;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>
+/// Reads a text/csv batch: a header row in any order and any case, comma or semicolon separated (detected),
+/// UTF-8 with or without a byte order mark, decimal point. Batch fields come from the query string.
+/// A bad cell becomes a problem naming its line and column; reading goes on so every problem is reported.
+/// </summary>
+public static class CsvBatchReader
+{
+    private static readonly string[] Columns =
+    [
+        "sampleType", "kitCode", "bottle", "position", "location", "analyte", "value", "unit", "qualifier", "mdl",
+        "reportingLimit", "uncertainty", "replicates", "acidifiedAt", "expected", "measured", "unspiked", "spikeAdded", "duplicate",
+    ];
+
+    public static async Task<ParsedBatch> ReadAsync(Stream body, IQueryCollection query, CancellationToken ct)
+    {
+        var problems = new List<BatchProblem>();
+        var header = ReadQuery(query, problems);
+        var results = new List<ResultRow>();
+        var qc = new List<QcRow>();
+        await using var csv = CsvReader.Create(body, new CsvReaderOptions { TrackLineNumbers = true }, leaveOpen: true);
+        await csv.ReadHeaderAsync(ct);
+        if (csv.Headers.Count == 0)
+        {
+            problems.Add(new("row 1", "header", "The file is empty; it needs a header row and one row per result."));
+            return new ParsedBatch(header, "csv", problems);
+        }
+        var index = MapColumns(csv.Headers, problems);
+        while (await csv.ReadAsync(ct))
+        {
+            var cells = new CsvCells(csv, index, $"row {csv.LineNumber}", problems);
+            var sampleType = cells.Text("sampleType");
+            if (sampleType is null || sampleType.Equals("sample", StringComparison.OrdinalIgnoreCase))
+                results.Add(cells.Result());
+            else
+                qc.Add(cells.Qc(sampleType));
+        }
+        return new ParsedBatch(header with { Results = results, Qc = qc }, "csv", problems);
+    }
+
+    private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, List<BatchProblem> problems)
+    {
+        var index = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
+        for (var i = 0; i < headers.Count; i++)
+        {
+            var name = headers[i].Trim();
+            var known = Columns.FirstOrDefault(c => c.Equals(name, StringComparison.OrdinalIgnoreCase));
+            if (known is null)
+                problems.Add(new("row 1", name, $"Unknown column. Columns: {string.Join(", ", Columns)}."));
+            else if (!index.TryAdd(known, i))
+                problems.Add(new("row 1", name, "This column appears twice."));
+        }
+        return index;
+    }
+
+    private static BatchRequest ReadQuery(IQueryCollection query, List<BatchProblem> problems)
+    {
+        DateTimeOffset? analyzedAt = null;
+        if (query["analyzedAt"].ToString() is { Length: > 0 } text)
+        {
+            if (CsvCells.TryTime(text, out var t)) analyzedAt = t;
+            else problems.Add(new("", "analyzedAt", CsvCells.TimeMessage));
+        }
+        bool? correction = query["correction"].ToString() switch
+        {
+            "" => null,
+            var c when bool.TryParse(c, out var b) => b,
+            _ => null,
+        };
+        if (query["correction"].ToString() is { Length: > 0 } raw && correction is null)
+            problems.Add(new("", "correction", "Use correction=true or correction=false."));
+        return new BatchRequest(Blank(query["batchId"]), Blank(query["method"]), analyzedAt, correction,
+            Blank(query["correctionReason"]), [], []);
+    }
+
+    private static string? Blank(string? s) => string.IsNullOrWhiteSpace(s) ? null : s.Trim();
+}

@@ -1,0 +1,73 @@
+using System.Globalization;
+using CommunityLead.Api.Infrastructure;
+using CsvHelper;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>Typed access to the cells of one CSV row; a cell that doesn't parse is recorded as a problem.</summary>
+internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> index, string where, List<BatchProblem> problems)
+{
+    public const string TimeMessage = OffsetRequiredConverter.Message;
+
+    public string? Text(string column)
+    {
+        if (!index.TryGetValue(column, out var i) || i >= csv.FieldCount) return null;
+        var value = csv.GetString(i)?.Trim();
+        return string.IsNullOrEmpty(value) ? null : value;
+    }
+
+    public double? Number(string column)
+    {
+        if (Text(column) is not { } text) return null;
+        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && double.IsFinite(value)) return value;
+        problems.Add(new(where, column, text.Contains(',')
+            ? $"'{text}' is not a number; use a decimal point (12.4), not a comma."
+            : $"'{text}' is not a number."));
+        return null;
+    }
+
+    public int? Whole(string column)
+    {
+        if (Text(column) is not { } text) return null;
+        if (int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value)) return value;
+        problems.Add(new(where, column, $"'{text}' is not a whole number."));
+        return null;
+    }
+
+    public DateTimeOffset? Time(string column)
+    {
+        if (Text(column) is not { } text) return null;
+        if (TryTime(text, out var value)) return value;
+        problems.Add(new(where, column, TimeMessage));
+        return null;
+    }
+
+    public IReadOnlyList<double>? Replicates()
+    {
+        if (Text("replicates") is not { } text) return null;
+        var values = new List<double>();
+        foreach (var part in text.Split(['|', ' '], StringSplitOptions.RemoveEmptyEntries))
+        {
+            if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out var v) || !double.IsFinite(v))
+            {
+                problems.Add(new(where, "replicates", $"'{part}' is not a number; separate replicate readings with '|'."));
+                return null;
+            }
+            values.Add(v);
+        }
+        return values;
+    }
+
+    public ResultRow Result() => new(
+        Text("kitCode"), Text("bottle"), Whole("position"), Text("location"), Text("analyte"), Number("value"), Text("unit"),
+        Text("qualifier"), Number("mdl"), Number("reportingLimit"), Number("uncertainty"), Replicates(), Time("acidifiedAt"))
+    { Where = where };
+
+    public QcRow Qc(string sampleType) => new(
+        sampleType, Text("analyte"), Number("expected"), Number("measured"), Number("unspiked"), Number("spikeAdded"),
+        Number("duplicate"), Text("unit"))
+    { Where = where };
+
+    /// <summary>Same rule as JSON: a time must carry its UTC offset.</summary>
+    public static bool TryTime(string text, out DateTimeOffset value) => OffsetRequiredConverter.TryParse(text, out value);
+}

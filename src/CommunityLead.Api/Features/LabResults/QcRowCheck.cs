@@ -1,0 +1,58 @@
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.LabResults;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>Checks that each QC row is complete for its type, and normalises it to the results' units.</summary>
+internal sealed class QcRowCheck(List<BatchProblem> problems)
+{
+    public List<CheckedQc> CheckAll(IReadOnlyList<QcRow> rows, Matrix matrix)
+    {
+        var checkedRows = new List<CheckedQc>();
+        foreach (var row in rows)
+            if (Check(row, matrix) is { } qc) checkedRows.Add(qc);
+        return checkedRows;
+    }
+
+    private CheckedQc? Check(QcRow row, Matrix matrix)
+    {
+        var before = problems.Count;
+        void Problem(string field, string reason) => problems.Add(new(row.Where, field, reason));
+        if (!KebabEnum.TryParse<QcType>(row.Type, out var type))
+            Problem(row.Where.StartsWith("row", StringComparison.Ordinal) ? "sampleType" : "type",
+                $"Use sample or one of: {KebabEnum.Allowed<QcType>()}.");
+        if (!Analytes.TryParse(row.Analyte, out var analyte)) Problem("analyte", "lead (Pb) or copper (Cu).");
+        double factor = 1;
+        if (problems.Count == before && !Units.TryFactor(analyte, matrix, row.Unit, out factor, out var unitError))
+            Problem("unit", unitError!);
+        if (problems.Count > before) return null;
+
+        foreach (var field in Required(type))
+            if (Value(row, field) is null) Problem(field, $"A {KebabEnum.Name(type)} needs '{field}'.");
+        foreach (var field in new[] { "expected", "spikeAdded", "duplicate", "unspiked" })
+            if (Value(row, field) is < 0) Problem(field, "Cannot be negative.");
+        // A calibration blank may read slightly below zero; other measurements may not.
+        if (type != QcType.CalibrationBlank && row.Measured is < 0) Problem("measured", "Cannot be negative.");
+        if (problems.Count > before) return null;
+
+        return new CheckedQc(new QcSample(type, analyte, row.Expected * factor, row.Measured * factor,
+            row.Unspiked * factor, row.SpikeAdded * factor, row.Duplicate * factor), Analytes.NormalUnit(analyte, matrix));
+    }
+
+    private static string[] Required(QcType type) => type switch
+    {
+        QcType.CalibrationCheck or QcType.FortifiedBlank => ["expected", "measured"],
+        QcType.CalibrationBlank => ["measured"],
+        QcType.Duplicate => ["measured", "duplicate"],
+        _ => ["unspiked", "spikeAdded", "measured"],
+    };
+
+    private static double? Value(QcRow row, string field) => field switch
+    {
+        "expected" => row.Expected,
+        "measured" => row.Measured,
+        "unspiked" => row.Unspiked,
+        "spikeAdded" => row.SpikeAdded,
+        _ => row.Duplicate,
+    };
+}

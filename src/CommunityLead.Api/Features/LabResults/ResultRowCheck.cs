@@ -1,0 +1,93 @@
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Kits;
+using CommunityLead.Rules.LabResults;
+using CommunityLead.Rules.Sampling;
+
+namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>Checks one result row against its kit and the bottles recorded at collection, and normalises it.</summary>
+internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits holding, List<BatchProblem> problems)
+{
+    public CheckedResult? Check(ResultRow row, KitFacts kit, IEnumerable<SampleFacts> kitSamples)
+    {
+        var before = problems.Count;
+        void Problem(string field, string reason) => problems.Add(new(row.Where, field, reason));
+
+        if (!BatchChecker.AcceptingStates.Contains(kit.State))
+            Problem("kitCode", $"Kit {kit.Code} is {KebabEnum.Name(kit.State)}; results are taken once the kit has been received.");
+        var matrix = kit.Kind == KitKind.Soil ? Matrix.Soil : Matrix.Water;
+
+        SampleFacts? sample = null;
+        if (!KebabEnum.TryParse<BottleType>(row.Bottle, out var bottle))
+            Problem("bottle", row.Bottle is null ? "Which bottle was analyzed?" : $"Use one of: {KebabEnum.Allowed<BottleType>()}.");
+        SoilLocation? location = null;
+        if (row.Location is not null)
+        {
+            if (KebabEnum.TryParse<SoilLocation>(row.Location, out var l)) location = l;
+            else Problem("location", $"Use one of: {KebabEnum.Allowed<SoilLocation>()}.");
+        }
+        else if (bottle == BottleType.Soil)
+            Problem("location", $"Which soil sample? {KebabEnum.Allowed<SoilLocation>()}.");
+        if (problems.Count == before)
+        {
+            sample = kitSamples.FirstOrDefault(s => s.Bottle == bottle && s.Position == row.Position && (location is null || s.Location == location));
+            if (sample is null)
+                Problem("bottle", $"Kit {kit.Code} has no {Describe(bottle, row.Position, location)} recorded at collection.");
+        }
+
+        if (!Analytes.TryParse(row.Analyte, out var analyte))
+            Problem("analyte", row.Analyte is null ? "Which analyte? lead or copper." : $"'{row.Analyte}' is not an analyte we take: lead (Pb) or copper (Cu).");
+        double factor = 1;
+        if (problems.Count == before && !Units.TryFactor(analyte, matrix, row.Unit, out factor, out var unitError))
+            Problem("unit", unitError!);
+
+        CheckNumbers(row, Problem);
+        if (row.AcidifiedAt is { } acidified && sample is not null && acidified < sample.CollectedAt)
+            Problem("acidifiedAt", "The sample cannot be acidified before it was collected.");
+        if (analyzedAt is { } analyzed && sample is not null && analyzed < sample.CollectedAt)
+            Problem("analyzedAt", $"The batch's analysis time is before kit {kit.Code}'s sample was collected.");
+        if (problems.Count > before || sample is null) return null;
+
+        var unit = Analytes.NormalUnit(analyte, matrix);
+        return new CheckedResult(row, kit.Id, kit.Code, bottle, sample.Location, matrix, analyte,
+            row.Value!.Value * factor, unit, row.Mdl!.Value * factor, row.ReportingLimit!.Value * factor,
+            row.Uncertainty * factor, row.Replicates?.Select(v => v * factor).ToList(), sample.CollectedAt,
+            HoldingTimes.Check(sample.CollectedAt, analyzedAt!.Value, row.AcidifiedAt, holding));
+    }
+
+    private static void CheckNumbers(ResultRow row, Action<string, string> problem)
+    {
+        if (row.Value is not { } value) problem("value", "The result value is required (for '<' results, the reporting limit).");
+        else if (!double.IsFinite(value) || value < 0) problem("value", "A result is a finite number, zero or more.");
+        if (row.Mdl is not { } mdl) problem("mdl", "The method detection limit is required.");
+        else if (mdl < 0) problem("mdl", "The detection limit cannot be negative.");
+        if (row.ReportingLimit is not { } rl) problem("reportingLimit", "The reporting limit is required.");
+        else if (rl <= 0) problem("reportingLimit", "The reporting limit must be above zero.");
+        if (row.Mdl is { } m && row.ReportingLimit is { } r && m > r)
+            problem("mdl", $"The detection limit ({m}) cannot be above the reporting limit ({r}).");
+        switch (row.Qualifier?.Trim().ToUpperInvariant())
+        {
+            case null or "":
+            case "J":
+                break;
+            case "<":
+                // The contract: below the reporting limit, value = the limit. Anything else is ambiguous.
+                if (row.Value is { } v && row.ReportingLimit is { } limit && Math.Abs(v - limit) > 1e-9 * Math.Max(1, limit))
+                    problem("value", $"With qualifier '<' the value must be the reporting limit ({limit}).");
+                break;
+            default:
+                problem("qualifier", "Use '<' (below the reporting limit), 'J' (estimated) or nothing.");
+                break;
+        }
+        if (row.Uncertainty is < 0) problem("uncertainty", "An uncertainty (one standard deviation) cannot be negative.");
+        if (row.Replicates is { } reps && (reps.Count > 20 || reps.Any(x => !double.IsFinite(x) || x < 0)))
+            problem("replicates", "Up to 20 replicate readings, each a finite number, zero or more.");
+    }
+
+    private static string Describe(BottleType bottle, int? position, SoilLocation? location) => bottle switch
+    {
+        BottleType.Sequential => $"sequential bottle {position?.ToString() ?? "(no position given)"}",
+        BottleType.Soil => location is null ? "soil sample" : $"{KebabEnum.Name(location.Value)} soil sample",
+        _ => $"{KebabEnum.Name(bottle)} bottle",
+    };
+}
