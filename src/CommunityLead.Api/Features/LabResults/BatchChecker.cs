@@ -1,4 +1,5 @@
 using CommunityLead.Api.Data;
+using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Kits;
 using CommunityLead.Rules.LabResults;
 using Microsoft.EntityFrameworkCore;
@@ -33,7 +34,8 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId);
 
-        var rowCheck = new ResultRowCheck(request.AnalyzedAt, options.Holding, problems);
+        var analyzedAt = Time(request.AnalyzedAt);
+        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems);
         var results = new List<CheckedResult>();
         var seen = new Dictionary<string, string>();
         for (var i = 0; i < rows.Count; i++)
@@ -61,9 +63,12 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         var qc = new QcRowCheck(problems).CheckAll(request.Qc ?? [], matrix);
 
         if (problems.Count > 0) return (null, problems);
-        return (new CheckedBatch(request.BatchId!, request.Method!, request.AnalyzedAt!.Value, request.Correction == true,
+        return (new CheckedBatch(request.BatchId!, request.Method!, analyzedAt!.Value, request.Correction == true,
             request.CorrectionReason, results, qc), problems);
     }
+
+    internal static DateTimeOffset? Time(string? text) =>
+        text is not null && OffsetRequiredConverter.TryParse(text.Trim(), out var value) ? value : null;
 
     private void CheckHeader(BatchRequest r, List<BatchProblem> problems)
     {
@@ -73,7 +78,8 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         if (string.IsNullOrWhiteSpace(r.Method)) problems.Add(new("", "method", "Name the method, e.g. EPA 200.8."));
         else if (r.Method.Length > 100) problems.Add(new("", "method", "At most 100 characters."));
         if (r.AnalyzedAt is null) problems.Add(new("", "analyzedAt", "When the batch was analyzed, with a UTC offset."));
-        else if (r.AnalyzedAt > clock.GetUtcNow().AddMinutes(15)) problems.Add(new("", "analyzedAt", "The analysis time is in the future."));
+        else if (Time(r.AnalyzedAt) is not { } analyzed) problems.Add(new("", "analyzedAt", OffsetRequiredConverter.Message));
+        else if (analyzed > clock.GetUtcNow().AddMinutes(15)) problems.Add(new("", "analyzedAt", "The analysis time is in the future."));
         if (r.Correction == true && string.IsNullOrWhiteSpace(r.CorrectionReason))
             problems.Add(new("", "correctionReason", "A correction needs the lab's reason."));
         if (r.CorrectionReason is { Length: > 500 }) problems.Add(new("", "correctionReason", "At most 500 characters."));

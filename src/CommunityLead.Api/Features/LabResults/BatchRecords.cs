@@ -37,7 +37,7 @@ public static class BatchRecords
                 Qualifier = r.Row.Qualifier?.Trim().ToUpperInvariant() is { Length: > 0 } q ? q : null,
                 Mdl = r.Mdl, ReportingLimit = r.ReportingLimit, Uncertainty = r.Uncertainty,
                 ReplicatesJson = r.Replicates is null ? null : JsonSerializer.Serialize(r.Replicates),
-                AcidifiedAt = r.Row.AcidifiedAt, CollectedAt = r.CollectedAt,
+                AcidifiedAt = r.AcidifiedAt, CollectedAt = r.CollectedAt,
                 HoldingFlags = r.Holding.Count == 0 ? null : JsonSerializer.Serialize(r.Holding, json),
             })],
             Qc = [.. batch.Qc.Select(q => new LabQcEntry

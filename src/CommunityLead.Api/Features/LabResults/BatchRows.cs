@@ -3,13 +3,13 @@ using System.Text.Json.Serialization;
 namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>
-/// A batch as the lab sent it, JSON or CSV alike. Codes and names stay text here so that every bad cell,
-/// in either format, is reported with its row and field instead of failing the whole parse.
+/// A batch as the lab sent it, JSON or CSV alike. Codes, names and times stay text here so that every bad
+/// cell, in either format, is reported with its row and field instead of failing the whole parse.
 /// </summary>
 public sealed record BatchRequest(
     string? BatchId,
     string? Method,
-    DateTimeOffset? AnalyzedAt,
+    string? AnalyzedAt,
     bool? Correction,
     string? CorrectionReason,
     IReadOnlyList<ResultRow>? Results,
@@ -28,7 +28,7 @@ public sealed record ResultRow(
     double? ReportingLimit,
     double? Uncertainty,
     IReadOnlyList<double>? Replicates,
-    DateTimeOffset? AcidifiedAt)
+    string? AcidifiedAt)
 {
     /// <summary>Where the row came from: a JSON pointer ("/results/3") or a CSV line ("row 5").</summary>
     [JsonIgnore] public string Where { get; init; } = "";

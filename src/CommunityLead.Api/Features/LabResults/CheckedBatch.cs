@@ -18,6 +18,7 @@ public sealed record CheckedResult(
     double ReportingLimit,
     double? Uncertainty,
     IReadOnlyList<double>? Replicates,
+    DateTimeOffset? AcidifiedAt,
     DateTimeOffset CollectedAt,
     IReadOnlyList<HoldingFlag> Holding);
 

@@ -58,12 +58,6 @@ public static class CsvBatchReader
 
     private static BatchRequest ReadQuery(IQueryCollection query, List<BatchProblem> problems)
     {
-        DateTimeOffset? analyzedAt = null;
-        if (query["analyzedAt"].ToString() is { Length: > 0 } text)
-        {
-            if (CsvCells.TryTime(text, out var t)) analyzedAt = t;
-            else problems.Add(new("", "analyzedAt", CsvCells.TimeMessage));
-        }
         bool? correction = query["correction"].ToString() switch
         {
             "" => null,
@@ -72,7 +66,7 @@ public static class CsvBatchReader
         };
         if (query["correction"].ToString() is { Length: > 0 } raw && correction is null)
             problems.Add(new("", "correction", "Use correction=true or correction=false."));
-        return new BatchRequest(Blank(query["batchId"]), Blank(query["method"]), analyzedAt, correction,
+        return new BatchRequest(Blank(query["batchId"]), Blank(query["method"]), Blank(query["analyzedAt"]), correction,
             Blank(query["correctionReason"]), [], []);
     }
 

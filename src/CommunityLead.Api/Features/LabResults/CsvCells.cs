@@ -1,5 +1,4 @@
 using System.Globalization;
-using CommunityLead.Api.Infrastructure;
 using CsvHelper;
 
 namespace CommunityLead.Api.Features.LabResults;
@@ -7,8 +6,6 @@ namespace CommunityLead.Api.Features.LabResults;
 /// <summary>Typed access to the cells of one CSV row; a cell that doesn't parse is recorded as a problem.</summary>
 internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> index, string where, List<BatchProblem> problems)
 {
-    public const string TimeMessage = OffsetRequiredConverter.Message;
-
     public string? Text(string column)
     {
         if (!index.TryGetValue(column, out var i) || i >= csv.FieldCount) return null;
@@ -34,14 +31,6 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
         return null;
     }
 
-    public DateTimeOffset? Time(string column)
-    {
-        if (Text(column) is not { } text) return null;
-        if (TryTime(text, out var value)) return value;
-        problems.Add(new(where, column, TimeMessage));
-        return null;
-    }
-
     public IReadOnlyList<double>? Replicates()
     {
         if (Text("replicates") is not { } text) return null;
@@ -60,7 +49,7 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
 
     public ResultRow Result() => new(
         Text("kitCode"), Text("bottle"), Whole("position"), Text("location"), Text("analyte"), Number("value"), Text("unit"),
-        Text("qualifier"), Number("mdl"), Number("reportingLimit"), Number("uncertainty"), Replicates(), Time("acidifiedAt"))
+        Text("qualifier"), Number("mdl"), Number("reportingLimit"), Number("uncertainty"), Replicates(), Text("acidifiedAt"))
     { Where = where };
 
     public QcRow Qc(string sampleType) => new(
@@ -68,6 +57,4 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
         Number("duplicate"), Text("unit"))
     { Where = where };
 
-    /// <summary>Same rule as JSON: a time must carry its UTC offset.</summary>
-    public static bool TryTime(string text, out DateTimeOffset value) => OffsetRequiredConverter.TryParse(text, out value);
 }

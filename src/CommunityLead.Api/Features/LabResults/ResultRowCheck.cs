@@ -42,17 +42,20 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
             Problem("unit", unitError!);
 
         CheckNumbers(row, Problem);
-        if (row.AcidifiedAt is { } acidified && sample is not null && acidified < sample.CollectedAt)
+        var acidifiedAt = BatchChecker.Time(row.AcidifiedAt);
+        if (row.AcidifiedAt is not null && acidifiedAt is null) Problem("acidifiedAt", OffsetRequiredConverter.Message);
+        if (acidifiedAt is { } acidified && sample is not null && acidified < sample.CollectedAt)
             Problem("acidifiedAt", "The sample cannot be acidified before it was collected.");
         if (analyzedAt is { } analyzed && sample is not null && analyzed < sample.CollectedAt)
             Problem("analyzedAt", $"The batch's analysis time is before kit {kit.Code}'s sample was collected.");
-        if (problems.Count > before || sample is null) return null;
+        // Without a valid analysis time (reported once, for the batch) holding times cannot be judged.
+        if (problems.Count > before || sample is null || analyzedAt is null) return null;
 
         var unit = Analytes.NormalUnit(analyte, matrix);
         return new CheckedResult(row, kit.Id, kit.Code, bottle, sample.Location, matrix, analyte,
             row.Value!.Value * factor, unit, row.Mdl!.Value * factor, row.ReportingLimit!.Value * factor,
-            row.Uncertainty * factor, row.Replicates?.Select(v => v * factor).ToList(), sample.CollectedAt,
-            HoldingTimes.Check(sample.CollectedAt, analyzedAt!.Value, row.AcidifiedAt, holding));
+            row.Uncertainty * factor, row.Replicates?.Select(v => v * factor).ToList(), acidifiedAt, sample.CollectedAt,
+            HoldingTimes.Check(sample.CollectedAt, analyzedAt!.Value, acidifiedAt, holding));
     }
 
     private static void CheckNumbers(ResultRow row, Action<string, string> problem)
