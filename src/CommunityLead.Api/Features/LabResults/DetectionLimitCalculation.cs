@@ -25,7 +25,9 @@ public sealed class MdlValidator : AbstractValidator<MdlRequest>
         RuleFor(r => r.Spiked).NotNull().Must(s => s is null || s.Count is >= 7 and <= 1000)
             .WithMessage("Give at least 7 (and at most 1000) spiked replicate results.");
         RuleForEach(r => r.Spiked).Must(double.IsFinite).WithMessage("Each replicate is a finite number.");
-        RuleFor(r => r.Blanks).Must(b => b is null || b.Count <= 10000).WithMessage("At most 10,000 blank results.");
+        // Appendix B asks for at least seven method blanks too; none at all means no blank-based MDL.
+        RuleFor(r => r.Blanks).Must(b => b is null || b.Count == 0 || b.Count is >= 7 and <= 10000)
+            .WithMessage("Give no blanks, or at least 7 (and at most 10,000) method blank results.");
         RuleForEach(r => r.Blanks).Must(double.IsFinite).WithMessage("Each blank result is a finite number.");
     }
 }
