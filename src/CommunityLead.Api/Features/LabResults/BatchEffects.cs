@@ -39,12 +39,13 @@ public static class BatchEffects
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId, s => (s.Bottle, s.Position, s.Location));
         var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);
+        var resultsPerKit = results.CountBy(r => r.KitId).ToDictionary();
         foreach (var kit in kits)
         {
             var lead = covered[kit.Id].ToHashSet();
             if (!bottles[kit.Id].All(lead.Contains)) continue;
             var letterWentOut = kit.State == KitState.LetterSent;
-            var detail = $"batch {batch.BatchId} v{batch.Version}: {results.Count(r => r.KitId == kit.Id)} results";
+            var detail = $"batch {batch.BatchId} v{batch.Version}: {resultsPerKit[kit.Id]} results";
             if (KitTransitions.Apply(db, kit, KitAction.RecordResults, actor, nowUtc, detail: detail) is { } illegal)
                 return illegal;
             if (letterWentOut)
