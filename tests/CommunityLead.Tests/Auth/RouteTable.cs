@@ -45,6 +45,19 @@ public static class RouteTable
         ["POST /api/kits/{code}/close"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Post, $"/api/kits/{await s.KitInStateAsync(KitState.LetterSent)}/close")),
 
+        ["POST /api/lab/batches"] = Allow([Roles.Lab], HttpStatusCode.Created,
+            async s => Send(HttpMethod.Post, "/api/lab/batches", await s.BatchBodyAsync(calibrationMeasured: 10.1))),
+        ["GET /api/lab/batches"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/lab/batches")),
+        ["GET /api/lab/batches/{batchId}"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/lab/batches/{await s.BatchAsync(calibrationMeasured: 10.1)}")),
+        // A calibration check 50% high fails QC, so the batch is held and waits for a coordinator.
+        ["POST /api/lab/batches/{batchId}/release"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Post, $"/api/lab/batches/{await s.BatchAsync(calibrationMeasured: 15)}/release",
+                new { reason = "lab re-ran the calibration and sent its log" })),
+        ["POST /api/lab/mdl"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK, _ => Send(HttpMethod.Post, "/api/lab/mdl",
+            new { spiked = new[] { 1.1, 0.9, 1.0, 1.2, 0.95, 1.05, 1.0 } })),
+        ["GET /api/attention/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/attention")),
+
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["GET /api/admin/audit"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/audit?pageSize=10")),
     };
@@ -79,9 +92,11 @@ public sealed record RouteExpectation(string[]? Allowed, HttpStatusCode Designed
         : HttpStatusCode.Forbidden;
 }
 
-/// <summary>Makes the households and kits a route needs, as a coordinator would.</summary>
+/// <summary>Makes the households, kits and batches a route needs, as a coordinator and the lab would.</summary>
 public sealed class RouteSetup(CommunityLeadFactory app, HttpClient coordinator)
 {
+    private readonly HttpClient lab = app.CreateClient(Roles.Lab);
+
     public Task<string> HouseholdAsync() => SignUpAsync(coordinator);
 
     public Task<string> KitAsync() => IssueKitAsync(coordinator);
@@ -91,6 +106,27 @@ public sealed class RouteSetup(CommunityLeadFactory app, HttpClient coordinator)
         var code = await KitAsync();
         await PostAsync(coordinator, $"/api/kits/{code}/collection", GoodWaterCollection(), HttpStatusCode.OK);
         return code;
+    }
+
+    /// <summary>A lab batch of one received kit's two bottles, with one lead calibration check.</summary>
+    public async Task<object> BatchBodyAsync(double calibrationMeasured)
+    {
+        var code = await CollectedKitAsync();
+        await PostAsync(lab, $"/api/kits/{code}/receipt", new { receivedAt = "2026-04-04T11:00:00+00:00" }, HttpStatusCode.OK);
+        object Result(string bottle, double value) =>
+            new { kitCode = code, bottle, analyte = "lead", value, unit = "ug/L", mdl = 0.5, reportingLimit = 1.0 };
+        return new
+        {
+            batchId = $"B-{Guid.NewGuid():N}", method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
+            results = new[] { Result("first-draw", 3.2), Result("flushed", 1.4) },
+            qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = calibrationMeasured, unit = "ug/L" } },
+        };
+    }
+
+    public async Task<string> BatchAsync(double calibrationMeasured)
+    {
+        var posted = await PostAsync(lab, "/api/lab/batches", await BatchBodyAsync(calibrationMeasured), HttpStatusCode.Created);
+        return posted["batchId"]!.GetValue<string>();
     }
 
     /// <summary>

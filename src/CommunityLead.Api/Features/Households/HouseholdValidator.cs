@@ -14,18 +14,20 @@ public sealed class HouseholdValidator : AbstractValidator<HouseholdRequest>
     {
         RuleFor(h => h.Name).NotEmpty().MaximumLength(200);
         RuleFor(h => h.Address).NotNull().SetValidator(new AddressValidator()!);
-        RuleFor(h => h.Phone).MaximumLength(40).Matches(PhonePattern)
+        // A blank phone or email means "none" (the mapping stores null), so only a non-blank one is checked.
+        RuleFor(h => h.Phone).MaximumLength(40).Matches(PhonePattern).When(h => !string.IsNullOrWhiteSpace(h.Phone))
             .WithMessage("Use digits, with spaces, dashes, dots or brackets if you like, e.g. +1 555 0107.");
-        RuleFor(h => h.Email).MaximumLength(254).Matches(EmailPattern).WithMessage("This does not look like an email address.");
+        RuleFor(h => h.Email).MaximumLength(254).Matches(EmailPattern).When(h => !string.IsNullOrWhiteSpace(h.Email))
+            .WithMessage("This does not look like an email address.");
         RuleFor(h => h.Language).NotNull();
         RuleFor(h => h.ConsentVersion).NotEmpty().MaximumLength(50);
-        RuleFor(h => h.ConsentGivenAt).NotNull()
+        RuleFor(h => h.ConsentGivenAt).Cascade(CascadeMode.Stop).NotNull()
             .GreaterThanOrEqualTo(Earliest).WithMessage("Consent cannot be dated before 2000.")
             .Must(at => at <= clock.GetUtcNow().AddMinutes(15)).WithMessage("Consent cannot be dated in the future.");
         RuleFor(h => h.AreaCode).NotEmpty().Matches(AreaCodePattern)
             .WithMessage("Use 1 to 40 letters, digits or dashes, like 'harbour' or 'north-3'.");
         RuleFor(h => h.WaterSource).NotNull();
-        RuleFor(h => h.YearBuilt)
+        RuleFor(h => h.YearBuilt).Cascade(CascadeMode.Stop)
             .GreaterThanOrEqualTo(1700).WithMessage("A year built before 1700 is almost certainly a typo.")
             .Must(y => y is null || y <= clock.GetUtcNow().Year).WithMessage("The year built cannot be in the future.");
         RuleFor(h => h.ServiceLine).NotNull();

@@ -63,7 +63,7 @@ public sealed class ReceiptValidator : AbstractValidator<ReceiptRequest>
 {
     public ReceiptValidator(TimeProvider clock)
     {
-        RuleFor(r => r.ReceivedAt).NotNull().GreaterThanOrEqualTo(SaneTimes.Earliest)
+        RuleFor(r => r.ReceivedAt).Cascade(CascadeMode.Stop).NotNull().GreaterThanOrEqualTo(SaneTimes.Earliest)
             .Must(t => t <= clock.GetUtcNow().AddMinutes(15)).WithMessage("A kit cannot be received in the future.");
         RuleFor(r => r.Note).MaximumLength(500);
     }
