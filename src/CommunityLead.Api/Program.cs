@@ -2,15 +2,28 @@ using CommunityLead.Api.Commands;
 using CommunityLead.Api.Features.Admin;
 using CommunityLead.Api.Features.Attention;
 using CommunityLead.Api.Features.Households;
+using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Interpretation;
 
 var builder = WebApplication.CreateBuilder(args);
 var command = CommandLine.Find(args);
 if (command is not null) CommandLine.QuietLogging(builder.Logging);
 builder.AddCommunityLead();
 var app = builder.Build();
+
+// Rule profiles are validated before anything else: a broken one stops the service, naming file and field.
+try
+{
+    app.Services.GetRequiredService<ProfileCatalog>();
+}
+catch (ProfileException e)
+{
+    Console.Error.WriteLine(e.Message);
+    return 1;
+}
 
 if (command is not null) return await command.RunAsync(app.Services, Console.Out, Console.Error);
 
@@ -27,6 +40,7 @@ app.MapGet("/health", () => TypedResults.Ok(new HealthStatus("ok"))).AllowAnonym
 app.MapHouseholds();
 app.MapKits();
 app.MapLabResults();
+app.MapInterpretation();
 app.MapAttention();
 app.MapAdmin();
 

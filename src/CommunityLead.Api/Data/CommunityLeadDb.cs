@@ -20,6 +20,7 @@ public class CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : DbCont
     public DbSet<LabResult> LabResults => Set<LabResult>();
     public DbSet<LabQcEntry> LabQc => Set<LabQcEntry>();
     public DbSet<AttentionItem> Attention => Set<AttentionItem>();
+    public DbSet<KitInterpretation> Interpretations => Set<KitInterpretation>();
 
     protected override void OnModelCreating(ModelBuilder modelBuilder) =>
         modelBuilder.ApplyConfigurationsFromAssembly(typeof(CommunityLeadDb).Assembly);

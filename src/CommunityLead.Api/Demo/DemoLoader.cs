@@ -120,17 +120,9 @@ public static class DemoLoader
             throw new InvalidDataException($"Demo kit {kit.Code}: '{KebabEnum.Name(action)}' is not allowed from {KebabEnum.Name(kit.State)}.");
     }
 
-    /// <summary>Demo:File if set; else seed-data/demo.json beside the program (published) or above the working directory.</summary>
-    private static string? FindScenarioFile(IConfiguration configuration)
-    {
-        if (configuration["Demo:File"] is { Length: > 0 } configured) return File.Exists(configured) ? configured : null;
-        var beside = Path.Combine(AppContext.BaseDirectory, "seed-data", "demo.json");
-        if (File.Exists(beside)) return beside;
-        for (var dir = new DirectoryInfo(Directory.GetCurrentDirectory()); dir is not null; dir = dir.Parent)
-        {
-            var candidate = Path.Combine(dir.FullName, "seed-data", "demo.json");
-            if (File.Exists(candidate)) return candidate;
-        }
-        return null;
-    }
+    /// <summary>Demo:File if set; else seed-data/demo.json.</summary>
+    private static string? FindScenarioFile(IConfiguration configuration) =>
+        configuration["Demo:File"] is { Length: > 0 } configured
+            ? (File.Exists(configured) ? configured : null)
+            : SeedData.Find("demo.json");
 }

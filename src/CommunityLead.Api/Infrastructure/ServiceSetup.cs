@@ -1,4 +1,5 @@
 using CommunityLead.Api.Auth;
+using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Rules.Sampling;
 using FluentValidation;
@@ -16,6 +17,9 @@ public static class ServiceSetup
         services.AddSingleton(TimeProvider.System);
         services.Configure<SamplingLimits>(builder.Configuration.GetSection("Sampling"));
         services.Configure<LabIntakeOptions>(builder.Configuration.GetSection("LabIntake"));
+        services.Configure<InterpretationOptions>(builder.Configuration.GetSection("Interpretation"));
+        services.AddSingleton<ProfileCatalog>();
+        services.AddScoped<InterpretAfterResults>();
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
         // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
         services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);

@@ -10,7 +10,9 @@ public class AttentionItemConfiguration : IEntityTypeConfiguration<AttentionItem
     {
         b.Property(a => a.KitCode).HasMaxLength(16);
         b.Property(a => a.Detail).HasMaxLength(500);
-        b.HasIndex(a => new { a.ResolvedAtUtc, a.RaisedAtUtc });
+        b.Property(a => a.ResolvedBy).HasMaxLength(100);
+        b.Property(a => a.ResolutionNote).HasMaxLength(500);
+        b.HasIndex(a => new { a.ResolvedAtUtc, a.Priority, a.RaisedAtUtc });
         b.HasOne<Kit>().WithMany().HasForeignKey(a => a.KitId).OnDelete(DeleteBehavior.Restrict);
     }
 }

@@ -83,6 +83,9 @@ namespace CommunityLead.Api.Data.Migrations
                     b.Property<int>("KitId")
                         .HasColumnType("INTEGER");
 
+                    b.Property<int>("Priority")
+                        .HasColumnType("INTEGER");
+
                     b.Property<DateTime>("RaisedAtUtc")
                         .HasColumnType("TEXT");
 
@@ -91,14 +94,22 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("ResolutionNote")
+                        .HasMaxLength(500)
+                        .HasColumnType("TEXT");
+
                     b.Property<DateTime?>("ResolvedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ResolvedBy")
+                        .HasMaxLength(100)
                         .HasColumnType("TEXT");
 
                     b.HasKey("Id");
 
                     b.HasIndex("KitId");
 
-                    b.HasIndex("ResolvedAtUtc", "RaisedAtUtc");
+                    b.HasIndex("ResolvedAtUtc", "Priority", "RaisedAtUtc");
 
                     b.ToTable("Attention");
                 });
@@ -379,6 +390,55 @@ namespace CommunityLead.Api.Data.Migrations
                     b.HasIndex("CollectionId");
 
                     b.ToTable("KitFlags");
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.KitInterpretation", b =>
+                {
+                    b.Property<int>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Band")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTime>("CreatedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("CreatedBy")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("KitCode")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("KitId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("OutcomeJson")
+                        .IsRequired()
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ProfileId")
+                        .IsRequired()
+                        .HasMaxLength(60)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("ProfileVersion")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTime?>("SupersededAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("KitId", "SupersededAtUtc");
+
+                    b.ToTable("Interpretations");
                 });
 
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.LabBatch", b =>
@@ -685,6 +745,15 @@ namespace CommunityLead.Api.Data.Migrations
                     b.HasOne("CommunityLead.Api.Data.Entities.Collection", null)
                         .WithMany("Flags")
                         .HasForeignKey("CollectionId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.KitInterpretation", b =>
+                {
+                    b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
+                        .WithMany()
+                        .HasForeignKey("KitId")
                         .OnDelete(DeleteBehavior.Restrict)
                         .IsRequired();
                 });

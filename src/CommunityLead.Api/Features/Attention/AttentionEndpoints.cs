@@ -1,28 +1,58 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
-using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Interpretation;
+using FluentValidation;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.EntityFrameworkCore;
 
 namespace CommunityLead.Api.Features.Attention;
 
-public sealed record AttentionEntry(int Id, string KitCode, AttentionReason Reason, string Detail, DateTime RaisedAt);
+public sealed record AttentionEntry(int Id, string KitCode, AttentionFlag Reason, string Detail, DateTime RaisedAt);
+
+public sealed record ResolveRequest(string? Note);
 
 public static class AttentionEndpoints
 {
-    // GET /api/attention     kits needing a person, oldest first      coordinator
+    // GET  /api/attention                 kits needing a person, most urgent first     coordinator
+    // POST /api/attention/{id}/resolve    done, with a note (e.g. "called, filter given")  coordinator
     public static void MapAttention(this IEndpointRouteBuilder app)
     {
         var group = app.MapGroup("/api/attention").WithTags("Attention")
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         group.MapGet("/", List);
+        group.MapPost("/{id:int}/resolve", Resolve).ProducesProblem(StatusCodes.Status404NotFound);
     }
 
+    /// <summary>Urgent results first, then action-level homes with a young child or pregnancy, and so on; oldest first within each.</summary>
     public static async Task<Ok<List<AttentionEntry>>> List(CommunityLeadDb db, CancellationToken ct) =>
         TypedResults.Ok(await db.Attention.AsNoTracking().Where(a => a.ResolvedAtUtc == null)
-            .OrderBy(a => a.RaisedAtUtc).ThenBy(a => a.Id)
+            .OrderBy(a => a.Priority).ThenBy(a => a.RaisedAtUtc).ThenBy(a => a.Id)
             .Select(a => new AttentionEntry(a.Id, a.KitCode, a.Reason, a.Detail, a.RaisedAtUtc))
             .ToListAsync(ct));
+
+    public static async Task<Results<NoContent, ProblemHttpResult>> Resolve(
+        int id, ResolveRequest request, CommunityLeadDb db, TimeProvider clock, HttpContext http, CancellationToken ct)
+    {
+        var item = await db.Attention.SingleOrDefaultAsync(a => a.Id == id, ct);
+        if (item is null) return TypedResults.Problem(statusCode: 404, title: "No such attention item.");
+        if (item.ResolvedAtUtc is not null)
+            return TypedResults.Problem(statusCode: 409, title: "Already resolved.",
+                detail: $"Resolved by {item.ResolvedBy}: {item.ResolutionNote}");
+        var actor = Actor.From(http.User);
+        item.ResolvedAtUtc = clock.GetUtcNow().UtcDateTime;
+        item.ResolvedBy = actor.Label;
+        item.ResolutionNote = request.Note!.Trim();
+        db.AuditTrail.Add(Audit.Kit(actor, item.ResolvedAtUtc.Value, item.KitCode, "resolve-attention",
+            reason: item.ResolutionNote, detail: KebabEnum.Name(item.Reason)));
+        await db.SaveChangesAsync(ct);
+        return TypedResults.NoContent();
+    }
+}
+
+public sealed class ResolveValidator : AbstractValidator<ResolveRequest>
+{
+    public ResolveValidator() =>
+        RuleFor(r => r.Note).NotEmpty().WithMessage("Say what was done, in a few words.").MaximumLength(500);
 }

@@ -26,7 +26,7 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         var codes = rows.Select(r => KitCode.Parse(r.KitCode)).ToList();
         var wanted = codes.Where(c => c.IsValid).Select(c => c.Code!).Distinct().ToList();
         var kits = await db.Kits.AsNoTracking().Where(k => wanted.Contains(k.Code))
-            .Select(k => new KitFacts(k.Id, k.Code, k.Kind, k.State)).ToDictionaryAsync(k => k.Code, ct);
+            .Select(k => new BatchKit(k.Id, k.Code, k.Kind, k.State)).ToDictionaryAsync(k => k.Code, ct);
         var kitIds = kits.Values.Select(k => k.Id).ToList();
         var samples = (await db.Samples.AsNoTracking()
                 .Join(db.Collections.Where(c => kitIds.Contains(c.KitId) && c.SupersededAtUtc == null),
@@ -35,9 +35,12 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
             .ToLookup(s => s.KitId);
 
         var analyzedAt = Time(request.AnalyzedAt);
-        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems);
+        // A cell that did not parse (CSV) is reported already; the row checks must not also call it missing.
+        var unreadable = parsed.Problems.Select(p => p.Key).ToHashSet();
+        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems, unreadable);
         var results = new List<CheckedResult>();
         var seen = new Dictionary<string, string>();
+        var rowKits = new List<BatchKit>();
         for (var i = 0; i < rows.Count; i++)
         {
             var row = rows[i];
@@ -51,6 +54,7 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
                 problems.Add(new(row.Where, "kitCode", $"No kit {codes[i].Code} was issued here."));
                 continue;
             }
+            rowKits.Add(kit);
             if (rowCheck.Check(row, kit, samples[kit.Id]) is not { } result) continue;
             var key = $"{kit.Code}|{result.Bottle}|{row.Position}|{result.Location}|{result.Analyte}";
             if (!seen.TryAdd(key, row.Where))
@@ -58,9 +62,10 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
             else
                 results.Add(result);
         }
-        // QC rows name no kit; a batch of soil results has soil QC.
-        var matrix = results.Count > 0 && results.All(r => r.Matrix == Matrix.Soil) ? Matrix.Soil : Matrix.Water;
-        var qc = new QcRowCheck(problems).CheckAll(request.Qc ?? [], matrix);
+        // QC rows name no kit; a batch of soil results has soil QC. Judged by the rows' kits, not only the rows that
+        // passed, so that a bad soil row does not also make the soil QC look like water QC with the wrong unit.
+        var matrix = rowKits.Count > 0 && rowKits.All(k => k.Kind == KitKind.Soil) ? Matrix.Soil : Matrix.Water;
+        var qc = new QcRowCheck(problems, unreadable).CheckAll(request.Qc ?? [], matrix);
 
         if (problems.Count > 0) return (null, problems);
         return (new CheckedBatch(request.BatchId!, request.Method!, analyzedAt!.Value, request.Correction == true,
@@ -86,6 +91,6 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
     }
 }
 
-public sealed record KitFacts(int Id, string Code, KitKind Kind, KitState State);
+public sealed record BatchKit(int Id, string Code, KitKind Kind, KitState State);
 
 public sealed record SampleFacts(int KitId, Rules.Sampling.BottleType Bottle, int? Position, Rules.Sampling.SoilLocation? Location, DateTimeOffset CollectedAt);

@@ -3,6 +3,7 @@ using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
 using CommunityLead.Rules.LabResults;
 using Microsoft.AspNetCore.Http.HttpResults;
@@ -18,7 +19,10 @@ namespace CommunityLead.Api.Features.LabResults;
 /// </summary>
 public static class BatchEffects
 {
-    public static async Task<ProblemHttpResult?> ApplyAsync(CommunityLeadDb db, LabBatch batch, IReadOnlyList<LabResult> results,
+    /// <summary>The kits that reached analyzed, ready to be interpreted once saved; or a conflict.</summary>
+    public sealed record Outcome(ProblemHttpResult? Conflict, IReadOnlyList<int> Analyzed);
+
+    public static async Task<Outcome> ApplyAsync(CommunityLeadDb db, LabBatch batch, IReadOnlyList<LabResult> results,
         Actor actor, DateTime nowUtc, CancellationToken ct)
     {
         var kitIds = results.Select(r => r.KitId).Distinct().ToList();
@@ -27,8 +31,12 @@ public static class BatchEffects
                         && (r.Batch!.Status == BatchStatus.Accepted || r.Batch.Status == BatchStatus.Released))
             .ToListAsync(ct);
         var incoming = results.Select(Key).ToHashSet();
-        foreach (var old in earlier.Where(r => incoming.Contains(Key(r))))
+        var replaced = earlier.Where(r => incoming.Contains(Key(r))).ToLookup(Key);
+        foreach (var old in replaced.SelectMany(g => g))
             old.SupersededAtUtc = nowUtc;
+        // A correction repeats the rows it did not change; kits whose figures all came back the same keep their
+        // state, so their households are not sent the same letter again.
+        var changedKits = results.Where(r => !replaced[Key(r)].Any(old => SameFigures(old, r))).Select(r => r.KitId).ToHashSet();
 
         var covered = earlier.Where(r => r.SupersededAtUtc is null).Concat(results)
             .Where(r => r.Analyte == Analyte.Lead)
@@ -40,23 +48,26 @@ public static class BatchEffects
             .ToLookup(s => s.KitId, s => (s.Bottle, s.Position, s.Location));
         var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);
         var resultsPerKit = results.CountBy(r => r.KitId).ToDictionary();
+        var analyzed = new List<int>();
         foreach (var kit in kits)
         {
             var lead = covered[kit.Id].ToHashSet();
-            if (!bottles[kit.Id].All(lead.Contains)) continue;
+            if (!changedKits.Contains(kit.Id) || !bottles[kit.Id].All(lead.Contains)) continue;
             var letterWentOut = kit.State == KitState.LetterSent;
             var detail = $"batch {batch.BatchId} v{batch.Version}: {resultsPerKit[kit.Id]} results";
             if (KitTransitions.Apply(db, kit, KitAction.RecordResults, actor, nowUtc, detail: detail) is { } illegal)
-                return illegal;
+                return new Outcome(illegal, []);
+            analyzed.Add(kit.Id);
             if (letterWentOut)
-                db.Attention.Add(new AttentionItem
-                {
-                    KitId = kit.Id, KitCode = kit.Code, Reason = AttentionReason.CorrectedAfterLetter, RaisedAtUtc = nowUtc,
-                    Detail = $"Corrected result — new letter needed (batch {batch.BatchId} version {batch.Version}).",
-                });
+                db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, AttentionFlag.CorrectedAfterLetter,
+                    $"Corrected result — new letter needed (batch {batch.BatchId} version {batch.Version}).", nowUtc));
         }
-        return null;
+        return new Outcome(null, analyzed);
     }
+
+    private static bool SameFigures(LabResult a, LabResult b) =>
+        a.Value == b.Value && a.Unit == b.Unit && a.Qualifier == b.Qualifier && a.Mdl == b.Mdl
+        && a.ReportingLimit == b.ReportingLimit && a.Uncertainty == b.Uncertainty;
 
     private static (int, Rules.Sampling.BottleType, int?, Rules.Sampling.SoilLocation?, Analyte) Key(LabResult r) =>
         (r.KitId, r.Bottle, r.Position, r.Location, r.Analyte);

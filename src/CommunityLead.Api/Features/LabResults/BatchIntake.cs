@@ -3,8 +3,10 @@ using System.Text.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.LabResults;
+using Microsoft.AspNetCore.Http.Features;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.AspNetCore.Http.Json;
 using Microsoft.EntityFrameworkCore;
@@ -22,11 +24,15 @@ public static class BatchIntake
 {
     public static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> Post(
         HttpContext http, CommunityLeadDb db, IOptions<LabIntakeOptions> settings, IOptions<JsonOptions> json,
-        TimeProvider clock, CancellationToken ct)
+        TimeProvider clock, InterpretAfterResults interpreting, CancellationToken ct)
     {
         var options = settings.Value;
         var jsonOptions = json.Value.SerializerOptions;
         if (http.Request.ContentLength > options.MaxBatchBytes) return BatchProblems.TooLarge(options.MaxBatchBytes);
+        // Kestrel's own body limit (30 MB by default) would otherwise cut in first, whatever the setting says;
+        // the size-limited stream below enforces LabIntake:MaxBatchBytes instead.
+        if (http.Features.Get<IHttpMaxRequestBodySizeFeature>() is { IsReadOnly: false } serverLimit)
+            serverLimit.MaxRequestBodySize = null;
         MediaTypeHeaderValue.TryParse(http.Request.ContentType, out var mediaType);
         ParsedBatch parsed;
         try
@@ -49,13 +55,16 @@ public static class BatchIntake
             throw new BadHttpRequestException("The batch is not valid JSON.", StatusCodes.Status400BadRequest, e);
         }
 
+        // A repeat is recognised before the checks: a retry must get the original outcome even when its kits
+        // have moved on since (closed, say), which the checks would now refuse.
+        var hash = ContentHash(parsed.Request, jsonOptions);
+        var latest = parsed.Problems.Count == 0 && parsed.Request.BatchId is { } batchId
+            ? await db.LabBatches.AsNoTracking().Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct)
+            : null;
+        if (latest?.ContentHash == hash) return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, ct));
+
         var (batch, problems) = await new BatchChecker(db, options, clock).CheckAsync(parsed, ct);
         if (batch is null) return BatchProblems.Unprocessable(problems);
-
-        var hash = ContentHash(parsed.Request, jsonOptions);
-        var latest = await db.LabBatches.AsNoTracking().Where(b => b.BatchId == batch.BatchId)
-            .OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct);
-        if (latest?.ContentHash == hash) return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, ct));
         if (latest is not null && !batch.Correction) return BatchProblems.ChangedContent(batch.BatchId, latest.Version);
         if (latest is null && batch.Correction)
             return BatchProblems.Unprocessable([new("", "correction", $"There is no batch {batch.BatchId} to correct.")]);
@@ -67,8 +76,8 @@ public static class BatchIntake
         db.AuditTrail.Add(Audit.Batch(actor, now, entity.BatchId, batch.Correction ? "post-correction" : "post",
             KebabEnum.Name(entity.Status), entity.CorrectionReason,
             $"version {entity.Version}, {entity.ResultCount} results, {parsed.Format}, QC {(entity.Status == BatchStatus.Held ? "failed" : "passed")}"));
-        if (entity.InEffect && await BatchEffects.ApplyAsync(db, entity, entity.Results, actor, now, ct) is { } illegal)
-            return illegal;
+        var effects = entity.InEffect ? await BatchEffects.ApplyAsync(db, entity, entity.Results, actor, now, ct) : null;
+        if (effects?.Conflict is { } illegal) return illegal;
         try
         {
             await db.SaveChangesAsync(ct);
@@ -78,6 +87,7 @@ public static class BatchIntake
             // Another post of this batch id won the race, or a kit changed meanwhile: nothing of ours was written.
             return BatchProblems.Raced(batch.BatchId);
         }
+        if (effects is not null) await interpreting.AfterResultsAsync(effects.Analyzed, actor, now, ct);
         return TypedResults.Created($"/api/lab/batches/{Uri.EscapeDataString(entity.BatchId)}",
             await BatchViews.OutcomeAsync(db, entity, jsonOptions, ct));
     }

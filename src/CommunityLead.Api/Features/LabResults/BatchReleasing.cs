@@ -2,6 +2,7 @@ using System.Text.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Infrastructure;
 using FluentValidation;
 using Microsoft.AspNetCore.Http.HttpResults;
@@ -19,7 +20,7 @@ public static class BatchReleasing
 {
     public static async Task<Results<Ok<BatchOutcome>, ValidationProblem, ProblemHttpResult>> Release(
         string batchId, ReleaseRequest request, CommunityLeadDb db, IOptions<JsonOptions> json, TimeProvider clock,
-        HttpContext http, CancellationToken ct)
+        InterpretAfterResults interpreting, HttpContext http, CancellationToken ct)
     {
         var batch = await db.LabBatches.Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct);
         if (batch is null)
@@ -27,7 +28,8 @@ public static class BatchReleasing
         if (batch.Status != BatchStatus.Held)
             return TypedResults.Problem(statusCode: 409, title: "Only a held batch can be released.",
                 detail: $"Batch {batchId} version {batch.Version} is {KebabEnum.Name(batch.Status)}.",
-                extensions: new Dictionary<string, object?> { ["status"] = KebabEnum.Name(batch.Status) });
+                // Not "status": that member of problem details is the HTTP status code.
+                extensions: new Dictionary<string, object?> { ["batchStatus"] = KebabEnum.Name(batch.Status) });
 
         var now = clock.GetUtcNow().UtcDateTime;
         var actor = Actor.From(http.User);
@@ -38,7 +40,8 @@ public static class BatchReleasing
         db.AuditTrail.Add(Audit.Batch(actor, now, batchId, "release", KebabEnum.Name(BatchStatus.Released), batch.ReleaseReason,
             $"version {batch.Version}"));
         var results = await db.LabResults.Where(r => r.LabBatchId == batch.Id).ToListAsync(ct);
-        if (await BatchEffects.ApplyAsync(db, batch, results, actor, now, ct) is { } illegal) return illegal;
+        var effects = await BatchEffects.ApplyAsync(db, batch, results, actor, now, ct);
+        if (effects.Conflict is { } illegal) return illegal;
         try
         {
             await db.SaveChangesAsync(ct);
@@ -47,6 +50,7 @@ public static class BatchReleasing
         {
             return BatchProblems.Raced(batchId);
         }
+        await interpreting.AfterResultsAsync(effects.Analyzed, actor, now, ct);
         return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, ct));
     }
 }

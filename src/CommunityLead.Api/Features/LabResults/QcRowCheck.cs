@@ -4,7 +4,7 @@ using CommunityLead.Rules.LabResults;
 namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>Checks that each QC row is complete for its type, and normalises it to the results' units.</summary>
-internal sealed class QcRowCheck(List<BatchProblem> problems)
+internal sealed class QcRowCheck(List<BatchProblem> problems, IReadOnlySet<string> unreadable)
 {
     public List<CheckedQc> CheckAll(IReadOnlyList<QcRow> rows, Matrix matrix)
     {
@@ -27,13 +27,17 @@ internal sealed class QcRowCheck(List<BatchProblem> problems)
             Problem("unit", unitError!);
         if (problems.Count > before) return null;
 
-        foreach (var field in Required(type))
-            if (Value(row, field) is null) Problem(field, $"A {KebabEnum.Name(type)} needs '{field}'.");
+        var incomplete = false;
+        foreach (var field in Required(type).Where(f => Value(row, f) is null))
+        {
+            incomplete = true;
+            if (!unreadable.Contains($"{row.Where}/{field}")) Problem(field, $"A {KebabEnum.Name(type)} needs '{field}'.");
+        }
         foreach (var field in new[] { "expected", "spikeAdded", "duplicate", "unspiked" })
             if (Value(row, field) is < 0) Problem(field, "Cannot be negative.");
         // A calibration blank may read slightly below zero; other measurements may not.
         if (type != QcType.CalibrationBlank && row.Measured is < 0) Problem("measured", "Cannot be negative.");
-        if (problems.Count > before) return null;
+        if (problems.Count > before || incomplete) return null;
 
         return new CheckedQc(new QcSample(type, analyte, row.Expected * factor, row.Measured * factor,
             row.Unspiked * factor, row.SpikeAdded * factor, row.Duplicate * factor), Analytes.NormalUnit(analyte, matrix));

@@ -6,12 +6,19 @@ using CommunityLead.Rules.Sampling;
 namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>Checks one result row against its kit and the bottles recorded at collection, and normalises it.</summary>
-internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits holding, List<BatchProblem> problems)
+internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits holding, List<BatchProblem> problems,
+    IReadOnlySet<string> unreadable)
 {
-    public CheckedResult? Check(ResultRow row, KitFacts kit, IEnumerable<SampleFacts> kitSamples)
+    public CheckedResult? Check(ResultRow row, BatchKit kit, IEnumerable<SampleFacts> kitSamples)
     {
         var before = problems.Count;
         void Problem(string field, string reason) => problems.Add(new(row.Where, field, reason));
+        var incomplete = false;
+        void Missing(string field, string reason)
+        {
+            incomplete = true;
+            if (!unreadable.Contains($"{row.Where}/{field}")) Problem(field, reason);
+        }
 
         if (!BatchChecker.AcceptingStates.Contains(kit.State))
             Problem("kitCode", $"Kit {kit.Code} is {KebabEnum.Name(kit.State)}; results are taken once the kit has been received.");
@@ -31,7 +38,7 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (problems.Count == before)
         {
             sample = kitSamples.FirstOrDefault(s => s.Bottle == bottle && s.Position == row.Position && (location is null || s.Location == location));
-            if (sample is null)
+            if (sample is null && !unreadable.Contains($"{row.Where}/position"))
                 Problem("bottle", $"Kit {kit.Code} has no {Describe(bottle, row.Position, location)} recorded at collection.");
         }
 
@@ -41,7 +48,7 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (problems.Count == before && !Units.TryFactor(analyte, matrix, row.Unit, out factor, out var unitError))
             Problem("unit", unitError!);
 
-        CheckNumbers(row, Problem);
+        CheckNumbers(row, Problem, Missing);
         var acidifiedAt = BatchChecker.Time(row.AcidifiedAt);
         if (row.AcidifiedAt is not null && acidifiedAt is null) Problem("acidifiedAt", OffsetRequiredConverter.Message);
         if (acidifiedAt is { } acidified && sample is not null && acidified < sample.CollectedAt)
@@ -49,7 +56,7 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (analyzedAt is { } analyzed && sample is not null && analyzed < sample.CollectedAt)
             Problem("analyzedAt", $"The batch's analysis time is before kit {kit.Code}'s sample was collected.");
         // Without a valid analysis time (reported once, for the batch) holding times cannot be judged.
-        if (problems.Count > before || sample is null || analyzedAt is null) return null;
+        if (problems.Count > before || incomplete || sample is null || analyzedAt is null) return null;
 
         var unit = Analytes.NormalUnit(analyte, matrix);
         return new CheckedResult(row, kit.Id, kit.Code, bottle, sample.Location, matrix, analyte,
@@ -58,13 +65,13 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
             HoldingTimes.Check(sample.CollectedAt, analyzedAt!.Value, acidifiedAt, holding));
     }
 
-    private static void CheckNumbers(ResultRow row, Action<string, string> problem)
+    private static void CheckNumbers(ResultRow row, Action<string, string> problem, Action<string, string> missing)
     {
-        if (row.Value is not { } value) problem("value", "The result value is required (for '<' results, the reporting limit).");
+        if (row.Value is not { } value) missing("value", "The result value is required (for '<' results, the reporting limit).");
         else if (!double.IsFinite(value) || value < 0) problem("value", "A result is a finite number, zero or more.");
-        if (row.Mdl is not { } mdl) problem("mdl", "The method detection limit is required.");
+        if (row.Mdl is not { } mdl) missing("mdl", "The method detection limit is required.");
         else if (mdl < 0) problem("mdl", "The detection limit cannot be negative.");
-        if (row.ReportingLimit is not { } rl) problem("reportingLimit", "The reporting limit is required.");
+        if (row.ReportingLimit is not { } rl) missing("reportingLimit", "The reporting limit is required.");
         else if (rl <= 0) problem("reportingLimit", "The reporting limit must be above zero.");
         if (row.Mdl is { } m && row.ReportingLimit is { } r && m > r)
             problem("mdl", $"The detection limit ({m}) cannot be above the reporting limit ({r}).");

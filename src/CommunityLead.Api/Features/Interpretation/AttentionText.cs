@@ -1,0 +1,33 @@
+using System.Globalization;
+using CommunityLead.Rules.Interpretation;
+using CommunityLead.Rules.LabResults;
+using KitOutcome = CommunityLead.Rules.Interpretation.Interpretation;
+
+namespace CommunityLead.Api.Features.Interpretation;
+
+/// <summary>The one line a coordinator reads on the attention list, saying what to do.</summary>
+public static class AttentionText
+{
+    public static string For(AttentionFlag flag, KitOutcome outcome) => flag switch
+    {
+        AttentionFlag.Urgent => $"Urgent result ({Worst(outcome)}): call the household now.",
+        AttentionFlag.ActionLevelVulnerableHome =>
+            $"At or above the action level ({Worst(outcome)}) in a home with a child under 6 or a pregnancy: call first and offer help.",
+        AttentionFlag.ActionLevel => $"At or above the action level ({Worst(outcome)}): call and offer help.",
+        AttentionFlag.SuspectedServiceLine => "Lead points to the service line or pipes further out: tell the household and the utility.",
+        AttentionFlag.RetestNeeded =>
+            $"The sample needs to be taken again: {string.Join(" ", outcome.Validity.Select(v => v.Reason).Distinct())}".Trim(),
+        _ => "Corrected result after the letter: a new letter is needed.",
+    };
+
+    /// <summary>The most serious finding (lead before copper at the same band), e.g. "22.3 µg/L lead".</summary>
+    private static string Worst(KitOutcome outcome)
+    {
+        var top = outcome.Findings.Where(f => f.Band != Band.Retest)
+            .OrderByDescending(f => f.Band).ThenBy(f => f.Analyte != Analyte.Lead).ThenByDescending(f => f.Value).FirstOrDefault();
+        return top is null ? "see results"
+            : $"{top.Value.ToString("0.###", CultureInfo.InvariantCulture)} {top.Unit} {KebabName(top.Analyte)}";
+    }
+
+    private static string KebabName(Analyte analyte) => analyte == Analyte.Lead ? "lead" : "copper";
+}

@@ -1,0 +1,77 @@
+using System.Reflection;
+
+namespace CommunityLead.Rules.Interpretation;
+
+/// <summary>
+/// Every message a household can get, in English (at or below 8th grade, checked by a test) and in Spanish
+/// written for the household (usted, plain and warm, the same content rather than a word-for-word copy).
+/// Codes are stable: letters, the API and tests refer to them. Numbered steps ("step.*") are numbered by the
+/// letter, in the order the interpreter lists them.
+/// </summary>
+public static partial class MessageCatalog
+{
+    /// <summary>
+    /// All templates, found by reflection so a new one can't be left out of the checks. Lazy: static fields spread
+    /// over partial files have no defined initialisation order, so they are read only once all are set.
+    /// </summary>
+    public static IReadOnlyList<MessageTemplate> All => all.Value;
+
+    private static readonly Lazy<IReadOnlyList<MessageTemplate>> all = new(() =>
+        [.. typeof(MessageCatalog).GetFields(BindingFlags.Public | BindingFlags.Static)
+            .Where(f => f.FieldType == typeof(MessageTemplate))
+            .Select(f => (MessageTemplate)f.GetValue(null)!)]);
+
+    // What the kit shows overall, by band. Water and soil differ; retest is shared.
+    public static readonly MessageTemplate WaterNotDetected = new("summary.water.not-detected",
+        "The lab did not find lead in your water samples.",
+        "El laboratorio no encontró plomo en sus muestras de agua.");
+
+    public static readonly MessageTemplate WaterLow = new("summary.water.low",
+        "Your results are low. They are below the levels our program uses. Low is not the same as zero, so the steps below still help.",
+        "Sus resultados son bajos: están por debajo de los niveles que usa nuestro programa. Pero bajo no quiere decir cero, así que le conviene seguir los pasos de abajo.");
+
+    public static readonly MessageTemplate WaterAdvisory = new("summary.water.advisory",
+        "At least one result is at or above our caution level. It is below the action level. Please take the steps below.",
+        "Al menos un resultado llega a nuestro nivel de precaución o lo supera, aunque no alcanza el nivel de acción. Le pedimos que siga los pasos de abajo.");
+
+    public static readonly MessageTemplate WaterAction = new("summary.water.action",
+        "At least one result is at or above the action level. Please start the steps below today. We will call you to offer help.",
+        "Al menos un resultado llega al nivel de acción o lo supera. Por favor, empiece hoy mismo con los pasos de abajo. Le vamos a llamar para ofrecerle ayuda.");
+
+    public static readonly MessageTemplate WaterUrgent = new("summary.water.urgent",
+        "At least one lead result is very high. Do not drink your tap water or use it for cooking or baby formula. Use bottled water until we talk. We will call you soon.",
+        "Al menos un resultado de plomo es muy alto. No beba el agua del grifo ni la use para cocinar o preparar la fórmula del bebé. Use agua embotellada hasta que hablemos. Le vamos a llamar muy pronto.");
+
+    public static readonly MessageTemplate SoilNotDetected = new("summary.soil.not-detected",
+        "The test did not find lead in your soil samples.",
+        "La prueba no encontró plomo en sus muestras de tierra.");
+
+    public static readonly MessageTemplate SoilLow = new("summary.soil.low",
+        "Lead in your soil is below the level for each place a sample was taken.",
+        "El plomo en su tierra está por debajo del nivel que corresponde a cada lugar donde se tomó una muestra.");
+
+    public static readonly MessageTemplate SoilInconclusive = new("summary.soil.inconclusive",
+        "At least one soil result is too close to its level for us to be sure. We will check it with a lab test. Until then, please take the steps below.",
+        "Al menos un resultado de tierra está tan cerca de su nivel que no podemos estar seguros. Lo vamos a comprobar con un análisis de laboratorio. Mientras tanto, le pedimos que siga los pasos de abajo.");
+
+    public static readonly MessageTemplate SoilAbove = new("summary.soil.above",
+        "Lead in at least one part of your yard is at or above the level for that place. Please take the steps below. We will call you to offer help.",
+        "En al menos una parte de su patio, el plomo llega al nivel de ese lugar o lo supera. Le pedimos que siga los pasos de abajo. Le vamos a llamar para ofrecerle ayuda.");
+
+    public static readonly MessageTemplate Retest = new("summary.retest",
+        "We cannot rely on this sample, so we ask you to test again.",
+        "No podemos confiar en esta muestra, así que le pedimos que repita la prueba.");
+
+    public static readonly MessageTemplate Corrected = new("letter.corrected",
+        "We found a mistake in a result we sent you before. This letter has the corrected result. Please use this one.",
+        "Encontramos un error en un resultado que le enviamos antes. Esta carta trae el resultado corregido; por favor, tome en cuenta este.");
+
+    // The closing every interpretation ends with. Well owners have no utility, so theirs names the health department.
+    public static readonly MessageTemplate ClosingPublic = new("closing.public",
+        "This letter is not medical advice. Follow what your local health department and your water utility tell you. Also follow what licensed professionals, such as plumbers, tell you.",
+        "Esta carta no es un consejo médico. Siga las indicaciones de su departamento de salud local y de su compañía de agua, y también las de profesionales con licencia, como los plomeros.");
+
+    public static readonly MessageTemplate ClosingWell = new("closing.well",
+        "This letter is not medical advice. Follow what your local health department tells you. Also follow what licensed professionals, such as plumbers and well contractors, tell you.",
+        "Esta carta no es un consejo médico. Siga las indicaciones de su departamento de salud local, y también las de profesionales con licencia, como los plomeros y los técnicos de pozos.");
+}
