@@ -57,6 +57,13 @@ public static class RouteTable
         ["POST /api/lab/mdl"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK, _ => Send(HttpMethod.Post, "/api/lab/mdl",
             new { spiked = new[] { 1.1, 0.9, 1.0, 1.2, 0.95, 1.05, 1.0 } })),
         ["GET /api/attention/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/attention")),
+        ["POST /api/attention/{id:int}/resolve"] = Coordinator(HttpStatusCode.NoContent,
+            async s => Send(HttpMethod.Post, $"/api/attention/{await s.AttentionItemAsync()}/resolve", new { note = "called; filter offered" })),
+
+        ["GET /api/kits/{code}/interpretation/"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/interpretation")),
+        ["POST /api/kits/{code}/interpretation/"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Post, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/interpretation")),
 
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["GET /api/admin/audit"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/audit?pageSize=10")),
@@ -109,18 +116,36 @@ public sealed class RouteSetup(CommunityLeadFactory app, HttpClient coordinator)
     }
 
     /// <summary>A lab batch of one received kit's two bottles, with one lead calibration check.</summary>
-    public async Task<object> BatchBodyAsync(double calibrationMeasured)
+    public async Task<object> BatchBodyAsync(double calibrationMeasured, double firstDrawLead = 3.2) =>
+        (await BatchForNewKitAsync(calibrationMeasured, firstDrawLead)).Body;
+
+    private async Task<(string Code, object Body)> BatchForNewKitAsync(double calibrationMeasured, double firstDrawLead)
     {
         var code = await CollectedKitAsync();
         await PostAsync(lab, $"/api/kits/{code}/receipt", new { receivedAt = "2026-04-04T11:00:00+00:00" }, HttpStatusCode.OK);
         object Result(string bottle, double value) =>
             new { kitCode = code, bottle, analyte = "lead", value, unit = "ug/L", mdl = 0.5, reportingLimit = 1.0 };
-        return new
+        return (code, new
         {
             batchId = $"B-{Guid.NewGuid():N}", method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
-            results = new[] { Result("first-draw", 3.2), Result("flushed", 1.4) },
+            results = new[] { Result("first-draw", firstDrawLead), Result("flushed", 1.4) },
             qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = calibrationMeasured, unit = "ug/L" } },
-        };
+        });
+    }
+
+    /// <summary>A kit whose accepted results made it interpreted.</summary>
+    public async Task<string> InterpretedKitAsync(double firstDrawLead)
+    {
+        var (code, body) = await BatchForNewKitAsync(calibrationMeasured: 10.1, firstDrawLead);
+        await PostAsync(lab, "/api/lab/batches", body, HttpStatusCode.Created);
+        return code;
+    }
+
+    /// <summary>An open attention item: a first draw at 25 µg/L is over the action level.</summary>
+    public async Task<int> AttentionItemAsync()
+    {
+        var code = await InterpretedKitAsync(firstDrawLead: 25);
+        return app.WithDb(db => db.Attention.First(a => a.KitCode == code && a.ResolvedAtUtc == null).Id);
     }
 
     public async Task<string> BatchAsync(double calibrationMeasured)
