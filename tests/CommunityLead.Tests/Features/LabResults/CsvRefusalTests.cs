@@ -1,0 +1,76 @@
+using System.Net;
+using CommunityLead.Api.Auth;
+using CommunityLead.Tests.Infrastructure;
+using static CommunityLead.Tests.Features.LabResults.LabFixtures;
+
+namespace CommunityLead.Tests.Features.LabResults;
+
+/// <summary>CSV problems are keyed by the file's line (header = line 1) and column, as the lab sees them in a spreadsheet.</summary>
+public class CsvRefusalTests
+{
+    [Fact]
+    public async Task CsvBatch_DecimalCommaUnknownColumnAndBadTimes_EveryLineNamedNothingWritten()
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var kit = await ReceivedKitAsync(coordinator, lab);
+        var csv = $"""
+            sampleType;kitCode;bottle;analyte;value;unit;mdl;reportingLimit;acidifiedAt;colour;expected;measured
+            sample;{kit};first-draw;lead;12.4;ug/L;0.3;1.0;;clear;;
+            sample;{kit};flushed;lead;12,4;ug/L;0.3;1.0;;clear;;
+            sample;{Mistyped(kit)};first-draw;copper;0.3;mg/L;0.002;0.005;;;;
+            sample;{kit};first-draw;copper;0.3;mg/L;0.002;0.005;2026-04-03 09:00;;;
+            calibration-check;;;lead;;ug/L;;;;;10,0;10.2
+            blank;;;lead;;ug/L;;;;;;0.04
+            """;
+        var before = FootprintOf(app);
+
+        var response = await PostCsvAsync(lab, Query("CSV-BAD-1", analyzedAt: "2026-04-08T14:30:00"), csv, bom: true);
+
+        var refused = await ReadAsync(response, HttpStatusCode.UnprocessableEntity);
+        var keys = ProblemKeys(refused);
+        Assert.Equal(new HashSet<string>
+        {
+            "row 1/colour", "row 3/value", "row 4/kitCode", "row 5/acidifiedAt", "row 6/expected", "row 7/sampleType",
+            "analyzedAt",
+        }, keys);
+        // One reason per unreadable cell: "12,4" is not also reported as a missing value.
+        var errors = refused["errors"]!;
+        Assert.Contains("decimal point", Assert.Single(errors["row 3/value"]!.AsArray())!.GetValue<string>(), StringComparison.Ordinal);
+        Assert.Contains("'10,0'", Assert.Single(errors["row 6/expected"]!.AsArray())!.GetValue<string>(), StringComparison.Ordinal);
+        var line3 = refused["problems"]!.AsArray().Single(p => p!["row"]?.GetValue<string>() == "row 3")!;
+        Assert.Equal("value", line3["field"]!.GetValue<string>());
+        Assert.Equal(before, FootprintOf(app));
+        Assert.Equal("received", await KitStateAsync(coordinator, kit));
+    }
+
+    [Fact]
+    public async Task CsvBatch_MissingBatchFieldsInQuery_422ForEachField()
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var kit = await ReceivedKitAsync(coordinator, lab);
+        var before = FootprintOf(app);
+
+        var response = await PostCsvAsync(lab, "method=EPA%20200.8&correction=maybe",
+            $"kitCode,bottle,analyte,value,unit,mdl,reportingLimit\n{kit},first-draw,lead,12.4,ug/L,0.3,1.0\n");
+
+        var keys = ProblemKeys(await ReadAsync(response, HttpStatusCode.UnprocessableEntity));
+        Assert.Equal(new HashSet<string> { "batchId", "analyzedAt", "correction" }, keys);
+        Assert.Equal(before, FootprintOf(app));
+    }
+
+    [Fact]
+    public async Task CsvBatch_HeaderOnly_422AskingForResults()
+    {
+        using var app = new CommunityLeadFactory();
+        var lab = app.CreateClient(Roles.Lab);
+
+        var response = await PostCsvAsync(lab, Query("CSV-EMPTY"), "kitCode,bottle,analyte,value,unit,mdl,reportingLimit\n");
+
+        Assert.Equal(new HashSet<string> { "results" }, ProblemKeys(await ReadAsync(response, HttpStatusCode.UnprocessableEntity)));
+        Assert.Equal(0, app.WithDb(db => db.LabBatches.Count()));
+    }
+}
