@@ -5,10 +5,12 @@ using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
+using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
 
-var builder = WebApplication.CreateBuilder(args);
+// Settings files travel with the program, so it reads the same appsettings.json from whatever folder it runs in.
+var builder = WebApplication.CreateBuilder(new WebApplicationOptions { Args = args, ContentRootPath = AppContext.BaseDirectory });
 var command = CommandLine.Find(args);
 if (command is not null) CommandLine.QuietLogging(builder.Logging);
 builder.AddCommunityLead();
@@ -41,6 +43,7 @@ app.MapHouseholds();
 app.MapKits();
 app.MapLabResults();
 app.MapInterpretation();
+app.MapLetters();
 app.MapAttention();
 app.MapAdmin();
 

@@ -21,6 +21,7 @@ public class CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : DbCont
     public DbSet<LabQcEntry> LabQc => Set<LabQcEntry>();
     public DbSet<AttentionItem> Attention => Set<AttentionItem>();
     public DbSet<KitInterpretation> Interpretations => Set<KitInterpretation>();
+    public DbSet<IssuedLetter> Letters => Set<IssuedLetter>();
 
     protected override void OnModelCreating(ModelBuilder modelBuilder) =>
         modelBuilder.ApplyConfigurationsFromAssembly(typeof(CommunityLeadDb).Assembly);

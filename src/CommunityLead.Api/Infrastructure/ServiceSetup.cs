@@ -1,6 +1,9 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.LabResults;
+using CommunityLead.Api.Features.Letters;
+using CommunityLead.Api.Features.Letters.Composing;
+using CommunityLead.Api.Features.Letters.Layout;
 using CommunityLead.Rules.Sampling;
 using FluentValidation;
 using Microsoft.AspNetCore.Authentication;
@@ -20,6 +23,10 @@ public static class ServiceSetup
         services.Configure<InterpretationOptions>(builder.Configuration.GetSection("Interpretation"));
         services.AddSingleton<ProfileCatalog>();
         services.AddScoped<InterpretAfterResults>();
+        services.AddSingleton(builder.Configuration.GetSection("Letters").Get<LetterSettings>()
+            ?? throw new InvalidOperationException("The Letters settings (program name, contacts) are missing."));
+        services.AddSingleton<ILetterLayout, PdfLetterLayout>();
+        services.AddScoped<LetterIssuing>();
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
         // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
         services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);

@@ -60,6 +60,16 @@ public static class RouteTable
         ["POST /api/attention/{id:int}/resolve"] = Coordinator(HttpStatusCode.NoContent,
             async s => Send(HttpMethod.Post, $"/api/attention/{await s.AttentionItemAsync()}/resolve", new { note = "called; filter offered" })),
 
+        ["GET /api/kits/{code}/letter"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/letter")),
+        ["POST /api/kits/{code}/letter/sent"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Post, $"/api/kits/{(await s.LetterAsync()).Code}/letter/sent", new { })),
+        ["GET /api/kits/{code}/letters"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/kits/{(await s.LetterAsync()).Code}/letters")),
+        ["GET /api/letters/{id:int}"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/letters/{(await s.LetterAsync()).Id}")),
+        ["POST /api/letters/batch"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Post, "/api/letters/batch")),
+
         ["GET /api/kits/{code}/interpretation/"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/interpretation")),
         ["POST /api/kits/{code}/interpretation/"] = Coordinator(HttpStatusCode.OK,
@@ -139,6 +149,15 @@ public sealed class RouteSetup(CommunityLeadFactory app, HttpClient coordinator)
         var (code, body) = await BatchForNewKitAsync(calibrationMeasured: 10.1, firstDrawLead);
         await PostAsync(lab, "/api/lab/batches", body, HttpStatusCode.Created);
         return code;
+    }
+
+    /// <summary>A kit whose letter was rendered (issued), and that letter's id.</summary>
+    public async Task<(string Code, int Id)> LetterAsync()
+    {
+        var code = await InterpretedKitAsync(firstDrawLead: 3.2);
+        var response = await coordinator.GetAsync($"/api/kits/{code}/letter");
+        await Expect(response, HttpStatusCode.OK);
+        return (code, int.Parse(response.Headers.GetValues("X-Letter-Id").Single()));
     }
 
     /// <summary>An open attention item: a first draw at 25 µg/L is over the action level.</summary>

@@ -297,6 +297,85 @@ namespace CommunityLead.Api.Data.Migrations
                     b.ToTable("Households");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.IssuedLetter", b =>
+                {
+                    b.Property<int>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateOnly>("CollectedOn")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ContentJson")
+                        .IsRequired()
+                        .HasColumnType("TEXT");
+
+                    b.Property<int?>("DaysFromCollection")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<int>("InterpretationId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTime>("IssuedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("IssuedBy")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Kind")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("KitCode")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("KitId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Language")
+                        .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("Pages")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("ProfileId")
+                        .IsRequired()
+                        .HasMaxLength(60)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("ProfileVersion")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTime?>("SentAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("SentBy")
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Sha256")
+                        .IsRequired()
+                        .HasMaxLength(64)
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("InterpretationId");
+
+                    b.HasIndex("SentAtUtc");
+
+                    b.HasIndex("KitId", "IssuedAtUtc");
+
+                    b.ToTable("Letters");
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Kit", b =>
                 {
                     b.Property<int>("Id")
@@ -724,6 +803,21 @@ namespace CommunityLead.Api.Data.Migrations
                 {
                     b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
                         .WithMany("Collections")
+                        .HasForeignKey("KitId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.IssuedLetter", b =>
+                {
+                    b.HasOne("CommunityLead.Api.Data.Entities.KitInterpretation", null)
+                        .WithMany()
+                        .HasForeignKey("InterpretationId")
+                        .OnDelete(DeleteBehavior.Restrict)
+                        .IsRequired();
+
+                    b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
+                        .WithMany()
                         .HasForeignKey("KitId")
                         .OnDelete(DeleteBehavior.Restrict)
                         .IsRequired();

@@ -1,0 +1,21 @@
+using CommunityLead.Api.Data.Entities;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Metadata.Builders;
+
+namespace CommunityLead.Api.Data.Configurations;
+
+public class IssuedLetterConfiguration : IEntityTypeConfiguration<IssuedLetter>
+{
+    public void Configure(EntityTypeBuilder<IssuedLetter> b)
+    {
+        b.Property(l => l.KitCode).HasMaxLength(16);
+        b.Property(l => l.ProfileId).HasMaxLength(60);
+        b.Property(l => l.Sha256).HasMaxLength(64);
+        b.Property(l => l.IssuedBy).HasMaxLength(100);
+        b.Property(l => l.SentBy).HasMaxLength(100);
+        b.HasIndex(l => new { l.KitId, l.IssuedAtUtc });
+        b.HasIndex(l => l.SentAtUtc);
+        b.HasOne<Kit>().WithMany().HasForeignKey(l => l.KitId).OnDelete(DeleteBehavior.Restrict);
+        b.HasOne<KitInterpretation>().WithMany().HasForeignKey(l => l.InterpretationId).OnDelete(DeleteBehavior.Restrict);
+    }
+}

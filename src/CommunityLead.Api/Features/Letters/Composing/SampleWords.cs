@@ -1,0 +1,64 @@
+using CommunityLead.Rules.Interpretation;
+using CommunityLead.Rules.LabResults;
+using CommunityLead.Rules.Sampling;
+
+namespace CommunityLead.Api.Features.Letters.Composing;
+
+/// <summary>Names for the results table and the scales: which sample, which metal, which level, the result itself.</summary>
+internal static class SampleWords
+{
+    /// <summary>The bottle in words, with the trade's name in brackets where a household may have heard it.</summary>
+    public static Phrase Sample(Finding f) => f.Bottle switch
+    {
+        BottleType.FirstDraw => new("First water from the tap (first draw)", "Primera agua del grifo (primera extracción)"),
+        BottleType.Flushed => new("After running the tap (flushed)", "Después de dejar correr el agua"),
+        BottleType.Sequential => new($"Sequential bottle {f.Position}", $"Botella {f.Position} de la serie"),
+        BottleType.FifthLiter => new("Fifth liter", "Quinto litro"),
+        _ => f.Location switch
+        {
+            SoilLocation.PlayArea => new("Play area soil", "Tierra de la zona de juegos"),
+            SoilLocation.Garden => new("Garden soil", "Tierra del huerto o jardín"),
+            SoilLocation.DripLine => new("Soil under the roof edge", "Tierra bajo el borde del techo"),
+            SoilLocation.Yard => new("Yard soil", "Tierra del patio"),
+            _ => new("Soil from your yard", "Tierra de su terreno"),
+        },
+    };
+
+    public static Phrase Metal(Analyte analyte) => analyte == Analyte.Lead ? new("Lead", "Plomo") : new("Copper", "Cobre");
+
+    /// <summary>"12.4 µg/L", or "Not detected (below 1 µg/L)": a censored result is never written as zero.</summary>
+    public static Phrase Result(Finding f)
+    {
+        var amount = MessageWords.Amount(f.Value, f.Unit);
+        return f.BelowReportingLimit ? new($"Not detected (below {amount.En})", $"No detectado (menos de {amount.Es})") : amount;
+    }
+
+    public static Phrase ScaleValue(Finding f) =>
+        f.BelowReportingLimit ? new("not detected", "no detectado") : MessageWords.Amount(f.Value, f.Unit);
+
+    public static readonly Phrase ActionLevel = new("Action level", "Nivel de acción");
+    public static readonly Phrase CautionLevel = new("Caution level", "Nivel de precaución");
+    public static readonly Phrase TasteLevel = new("Taste level", "Nivel por sabor");
+    public static readonly Phrase UrgentLevel = new("Urgent level", "Nivel urgente");
+    public static readonly Phrase LowestLevel = new("Lowest level we use", "Nivel más bajo que usamos");
+    public static readonly Phrase SoilLevel = new("Level for this place", "Nivel para este lugar");
+
+    /// <summary>"Action level 10 µg/L" / "Nivel de acción: 10 µg/L".</summary>
+    public static Phrase Level(Phrase name, double value, string unit)
+    {
+        var amount = MessageWords.Amount(value, unit);
+        return new($"{name.En} {amount.En}", $"{name.Es}: {amount.Es}");
+    }
+
+    /// <summary>Where a soil result stands against its level; "not sure" when its uncertainty spans the level.</summary>
+    public static Phrase SoilComparedWith(SoilComparison comparison, double level, string unit)
+    {
+        var amount = MessageWords.Amount(level, unit);
+        return comparison switch
+        {
+            SoilComparison.Above => new($"At or above the level of {amount.En}", $"Igual o por encima del nivel de {amount.Es}"),
+            SoilComparison.Below => new($"Below the level of {amount.En}", $"Por debajo del nivel de {amount.Es}"),
+            _ => new($"Not sure: close to the level of {amount.En}", $"No es seguro: cerca del nivel de {amount.Es}"),
+        };
+    }
+}

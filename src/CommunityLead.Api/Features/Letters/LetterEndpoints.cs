@@ -1,0 +1,36 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Households;
+
+namespace CommunityLead.Api.Features.Letters;
+
+public sealed record LetterSentRequest(int? LetterId);
+
+public sealed record LetterListing(int Id, string KitCode, LetterKind Kind, LetterLanguage Language, string ProfileId, int ProfileVersion,
+    string Sha256, int Pages, DateTime IssuedAt, DateTime? SentAt, int? DaysFromCollection);
+
+public static class LetterEndpoints
+{
+    // GET  /api/kits/{code}/letter[?lang=es]   the letter for the current interpretation (PDF)     coordinator
+    // POST /api/kits/{code}/letter/sent        confirm it went out: kit → letter-sent              coordinator
+    // GET  /api/kits/{code}/letters            every letter issued for the kit                     coordinator
+    // GET  /api/letters/{id}                   a stored letter, rendered again byte for byte       coordinator
+    // POST /api/letters/batch[?combined=true]  ZIP of every kit ready for a letter                 coordinator
+    public static void MapLetters(this IEndpointRouteBuilder app)
+    {
+        var kit = app.MapGroup("/api/kits/{code}").WithTags("Letters")
+            .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
+            .ProducesProblem(StatusCodes.Status404NotFound).ProducesProblem(StatusCodes.Status409Conflict);
+        kit.MapGet("/letter", LetterHandlers.Get).Produces(StatusCodes.Status200OK, contentType: "application/pdf");
+        kit.MapPost("/letter/sent", LetterHandlers.MarkSent);
+        kit.MapGet("/letters", LetterHandlers.List);
+
+        var letters = app.MapGroup("/api/letters").WithTags("Letters")
+            .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
+        letters.MapGet("/{id:int}", LetterHandlers.Rerender).Produces(StatusCodes.Status200OK, contentType: "application/pdf")
+            .ProducesProblem(StatusCodes.Status404NotFound);
+        letters.MapPost("/batch", LetterHandlers.Batch).Produces(StatusCodes.Status200OK, contentType: "application/zip");
+    }
+}

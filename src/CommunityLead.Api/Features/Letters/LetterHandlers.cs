@@ -1,0 +1,124 @@
+using System.IO.Compression;
+using System.Text;
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Kits;
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Households;
+using CommunityLead.Rules.Interpretation;
+using CommunityLead.Rules.Kits;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Features.Letters;
+
+public static class LetterHandlers
+{
+    public static async Task<Results<FileContentHttpResult, ValidationProblem, ProblemHttpResult>> Get(
+        string code, CommunityLeadDb db, LetterIssuing issuing, HttpContext http, CancellationToken ct, string? lang = null)
+    {
+        LetterLanguage? language = null;
+        if (lang is not null)
+        {
+            if (!KebabEnum.TryParse<LetterLanguage>(lang, out var l)) return Problems.Field("lang", "Use en or es.");
+            language = l;
+        }
+        var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
+        if (invalid is not null) return invalid;
+        if (kit is null) return missing!;
+        if (kit.State is not (KitState.Interpreted or KitState.LetterSent or KitState.Closed))
+            return NotReady(kit.Code, kit.State);
+        var letter = (await issuing.IssueAsync([kit.Id], language, Actor.From(http.User), ct)).SingleOrDefault();
+        if (letter is null) return NotReady(kit.Code, kit.State);
+        http.Response.Headers["X-Letter-Id"] = letter.Record.Id.ToString();
+        http.Response.Headers["X-Letter-Sha256"] = letter.Record.Sha256;
+        return TypedResults.File(letter.Pdf, "application/pdf", FileName(letter.Record));
+    }
+
+    /// <summary>Nothing is marked sent without this confirmation; it also records how long the household waited.</summary>
+    public static async Task<Results<Ok<LetterListing>, ValidationProblem, ProblemHttpResult>> MarkSent(
+        string code, LetterSentRequest? request, CommunityLeadDb db, TimeProvider clock, HttpContext http, CancellationToken ct)
+    {
+        var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
+        if (invalid is not null) return invalid;
+        if (kit is null) return missing!;
+        var current = await db.Interpretations.Where(i => i.KitId == kit.Id && i.SupersededAtUtc == null).Select(i => (int?)i.Id).SingleOrDefaultAsync(ct);
+        var letter = await db.Letters
+            .Where(l => l.KitId == kit.Id && (request == null || request.LetterId == null ? l.InterpretationId == current : l.Id == request.LetterId))
+            .OrderByDescending(l => l.IssuedAtUtc).ThenByDescending(l => l.Id).FirstOrDefaultAsync(ct);
+        if (letter is null)
+            return TypedResults.Problem(statusCode: 409, title: "No letter to confirm.",
+                detail: $"Render the letter for kit {kit.Code} first (GET /api/kits/{kit.Code}/letter), then confirm it was sent.");
+        var now = clock.GetUtcNow().UtcDateTime;
+        var actor = Actor.From(http.User);
+        if (KitTransitions.Apply(db, kit, KitAction.SendLetter, actor, now,
+                detail: $"letter {letter.Id} ({KebabEnum.Name(letter.Kind)}, {KebabEnum.Name(letter.Language)}), sha256 {letter.Sha256[..12]}") is { } illegal)
+            return illegal;
+        letter.SentAtUtc = now;
+        letter.SentBy = actor.Label;
+        letter.DaysFromCollection = DateOnly.FromDateTime(now).DayNumber - letter.CollectedOn.DayNumber;
+        await db.Attention.Where(a => a.KitId == kit.Id && a.ResolvedAtUtc == null && a.Reason == AttentionFlag.CorrectedAfterLetter)
+            .ForEachAsync(a => { a.ResolvedAtUtc = now; a.ResolvedBy = actor.Label; a.ResolutionNote = $"Corrected letter {letter.Id} sent."; }, ct);
+        if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
+        return TypedResults.Ok(Listing(letter));
+    }
+
+    public static async Task<Results<Ok<List<LetterListing>>, ValidationProblem, ProblemHttpResult>> List(
+        string code, CommunityLeadDb db, CancellationToken ct)
+    {
+        var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
+        if (invalid is not null) return invalid;
+        if (kit is null) return missing!;
+        var letters = await db.Letters.AsNoTracking().Where(l => l.KitId == kit.Id).OrderBy(l => l.Id).ToListAsync(ct);
+        return TypedResults.Ok(letters.Select(Listing).ToList());
+    }
+
+    public static async Task<Results<FileContentHttpResult, ProblemHttpResult>> Rerender(
+        int id, CommunityLeadDb db, LetterIssuing issuing, HttpContext http, CancellationToken ct)
+    {
+        var letter = await db.Letters.AsNoTracking().SingleOrDefaultAsync(l => l.Id == id, ct);
+        if (letter is null) return TypedResults.Problem(statusCode: 404, title: "No such letter.");
+        var pdf = issuing.Rerender(letter);
+        var same = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(pdf)) == letter.Sha256;
+        http.Response.Headers["X-Letter-Sha256"] = letter.Sha256;
+        http.Response.Headers["X-Letter-Identical"] = same ? "true" : "false";
+        return TypedResults.File(pdf, "application/pdf", FileName(letter));
+    }
+
+    /// <summary>Every kit ready for a letter (interpreted, not yet sent) in one ZIP, with a manifest and optionally one PDF to print.</summary>
+    public static async Task<FileContentHttpResult> Batch(
+        CommunityLeadDb db, LetterIssuing issuing, TimeProvider clock, HttpContext http, CancellationToken ct, bool combined = false)
+    {
+        var ready = await db.Kits.AsNoTracking().Where(k => k.State == KitState.Interpreted).Select(k => k.Id).ToListAsync(ct);
+        var letters = ready.Count == 0 ? [] : await issuing.IssueAsync(ready, null, Actor.From(http.User), ct);
+        using var buffer = new MemoryStream();
+        using (var zip = new ZipArchive(buffer, ZipArchiveMode.Create, leaveOpen: true))
+        {
+            var manifest = new StringBuilder("kitCode,letterId,kind,language,pages,sha256\n");
+            foreach (var letter in letters)
+            {
+                await using (var entry = zip.CreateEntry($"letters/{FileName(letter.Record)}", CompressionLevel.Fastest).Open())
+                    await entry.WriteAsync(letter.Pdf, ct);
+                var r = letter.Record;
+                manifest.Append($"{r.KitCode},{r.Id},{KebabEnum.Name(r.Kind)},{KebabEnum.Name(r.Language)},{r.Pages},{r.Sha256}\n");
+            }
+            await using (var entry = zip.CreateEntry("manifest.csv").Open())
+                await entry.WriteAsync(Encoding.UTF8.GetBytes(manifest.ToString()), ct);
+            if (combined && letters.Count > 0)
+                await using (var entry = zip.CreateEntry("all-letters.pdf", CompressionLevel.Fastest).Open())
+                    await entry.WriteAsync(LetterPdf.Combine(letters.Select(l => l.Pdf)), ct);
+        }
+        return TypedResults.File(buffer.ToArray(), "application/zip", $"letters-{clock.GetUtcNow():yyyy-MM-dd}.zip");
+    }
+
+    private static ProblemHttpResult NotReady(string code, KitState state) =>
+        TypedResults.Problem(statusCode: 409, title: "This kit has no interpretation for a letter yet.",
+            detail: $"Kit {code} is {KebabEnum.Name(state)}; a letter is written once its results are in and interpreted.",
+            extensions: new Dictionary<string, object?> { ["currentState"] = KebabEnum.Name(state) });
+
+    private static string FileName(IssuedLetter l) => $"letter-{l.KitCode}-{KebabEnum.Name(l.Language)}.pdf";
+
+    private static LetterListing Listing(IssuedLetter l) =>
+        new(l.Id, l.KitCode, l.Kind, l.Language, l.ProfileId, l.ProfileVersion, l.Sha256, l.Pages, l.IssuedAtUtc, l.SentAtUtc, l.DaysFromCollection);
+}

@@ -1,0 +1,85 @@
+using System.Security.Cryptography;
+using System.Text.Json;
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Interpretation;
+using CommunityLead.Api.Features.Letters.Composing;
+using CommunityLead.Rules.Households;
+using CommunityLead.Rules.Interpretation;
+using Microsoft.AspNetCore.Http.Json;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Options;
+using KitOutcome = CommunityLead.Rules.Interpretation.Interpretation;
+
+namespace CommunityLead.Api.Features.Letters;
+
+public sealed record RenderedLetter(IssuedLetter Record, byte[] Pdf);
+
+/// <summary>
+/// Composes and renders letters from kits' stored interpretations and records each one issued (content,
+/// hash, interpretation and profile version, language). Works on many kits at once for a mailing.
+/// </summary>
+public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, ILetterLayout layout, LetterSettings settings,
+    IOptions<JsonOptions> json, TimeProvider clock)
+{
+    private JsonSerializerOptions Json => json.Value.SerializerOptions;
+
+    /// <summary>Letters for the given kits; kits without a stored interpretation are skipped.</summary>
+    public async Task<List<RenderedLetter>> IssueAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
+    {
+        var kits = await db.Kits.AsNoTracking().Where(k => kitIds.Contains(k.Id))
+            .Select(k => new { k.Id, k.Code, k.Household }).ToListAsync(ct);
+        var interpretations = await db.Interpretations.AsNoTracking()
+            .Where(i => kitIds.Contains(i.KitId) && i.SupersededAtUtc == null).ToDictionaryAsync(i => i.KitId, ct);
+        var collectedOn = (await db.Samples.AsNoTracking()
+                .Join(db.Collections.Where(c => kitIds.Contains(c.KitId) && c.SupersededAtUtc == null),
+                    s => s.CollectionId, c => c.Id, (s, c) => new { c.KitId, s.CollectedAt, s.CollectedAtUtc })
+                .ToListAsync(ct))
+            .GroupBy(x => x.KitId).ToDictionary(g => g.Key, g => DateOnly.FromDateTime(g.MinBy(x => x.CollectedAtUtc)!.CollectedAt.DateTime));
+        var sentBefore = (await db.Letters.AsNoTracking().Where(l => kitIds.Contains(l.KitId) && l.SentAtUtc != null)
+            .Select(l => l.KitId).Distinct().ToListAsync(ct)).ToHashSet();
+
+        var now = clock.GetUtcNow().UtcDateTime;
+        var letters = new List<RenderedLetter>();
+        foreach (var kit in kits.OrderBy(k => k.Code, StringComparer.Ordinal))
+        {
+            if (!interpretations.TryGetValue(kit.Id, out var stored)) continue;
+            var outcome = JsonSerializer.Deserialize<KitOutcome>(stored.OutcomeJson, Json)!;
+            var household = kit.Household!;
+            var lang = language ?? household.Language;
+            var kind = outcome.Band == Band.Retest ? LetterKind.Retest
+                : sentBefore.Contains(kit.Id) ? LetterKind.Corrected : LetterKind.Results;
+            var profile = catalog.All.FirstOrDefault(p => p.Id == stored.ProfileId);
+            var collected = collectedOn.GetValueOrDefault(kit.Id);
+            // The scales show every level only if the profile is still the version the interpretation used.
+            var levels = profile is not null && profile.Version == stored.ProfileVersion
+                ? LetterLevels.For(profile, catalog.ProgramRules, collected) : null;
+            var content = LetterComposer.Compose(outcome, profile?.Name ?? stored.ProfileId,
+                new LetterRecipient(household.Name, household.Address.Line1, household.Address.Line2, household.Address.City,
+                    household.Address.Region, household.Address.PostalCode),
+                lang, kind, kit.Code, collected, DateOnly.FromDateTime(now), household.WaterSource == WaterSource.PrivateWell,
+                household.ChildUnder6 || household.Pregnant, settings, levels);
+            var pdf = layout.Render(content);
+            var hash = Convert.ToHexStringLower(SHA256.HashData(pdf));
+            var record = await db.Letters.FirstOrDefaultAsync(l => l.KitId == kit.Id && l.Sha256 == hash, ct);
+            if (record is null)
+            {
+                record = new IssuedLetter
+                {
+                    KitId = kit.Id, KitCode = kit.Code, InterpretationId = stored.Id, ProfileId = stored.ProfileId,
+                    ProfileVersion = stored.ProfileVersion, Language = lang, Kind = kind,
+                    ContentJson = JsonSerializer.Serialize(content, Json), Sha256 = hash, Pages = LetterPdf.PageCount(pdf),
+                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = collected,
+                };
+                db.Letters.Add(record);
+            }
+            letters.Add(new RenderedLetter(record, pdf));
+        }
+        await db.SaveChangesAsync(ct);
+        return letters;
+    }
+
+    /// <summary>Renders a stored letter again from its recorded content; the bytes must match the recorded hash.</summary>
+    public byte[] Rerender(IssuedLetter letter) => layout.Render(JsonSerializer.Deserialize<LetterContent>(letter.ContentJson, Json)!);
+}

@@ -1,0 +1,151 @@
+using System.IO.Compression;
+using System.Net;
+using System.Net.Http.Json;
+using System.Text.Json.Nodes;
+using CommunityLead.Tests.Features.Interpretation;
+using CommunityLead.Tests.Infrastructure;
+using static CommunityLead.Tests.Infrastructure.Fixtures;
+
+namespace CommunityLead.Tests.Features.Letters;
+
+public class LetterWorkflowTests
+{
+    private static async Task<(byte[] Pdf, HttpResponseMessage Response)> LetterAsync(HttpClient client, string code, string? lang = null)
+    {
+        var response = await client.GetAsync($"/api/kits/{code}/letter{(lang is null ? "" : $"?lang={lang}")}");
+        await Expect(response, HttpStatusCode.OK);
+        Assert.Equal("application/pdf", response.Content.Headers.ContentType!.MediaType);
+        return (await response.Content.ReadAsByteArrayAsync(), response);
+    }
+
+    [Fact]
+    public async Task Letter_ActionLevelWithYoungChild_ShowsValuesLevelProfileContactsAndCautions()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync(h => { h["childUnder6"] = true; h["language"] = "en"; h["name"] = "Perpetua Nettleford"; });
+        await flow.PostLeadAsync(code, firstDraw: 12.4, flushed: 3.1);
+        var other = await flow.ReceivedKitAsync(h => h["name"] = "Isidore Ivesby");
+        await flow.PostLeadAsync(other, firstDraw: 2.2, flushed: 1.1);
+
+        var letter = LetterPdfText.Read((await LetterAsync(flow.Coordinator, code)).Pdf);
+        Assert.InRange(letter.Pages, 1, 2);
+        var text = letter.Flat;
+        Assert.Contains("Perpetua Nettleford", text);
+        Assert.DoesNotContain("Isidore Ivesby", text);        // no data of another household
+        Assert.Contains(code, text);
+        Assert.Contains("12.4 µg/L", text);
+        Assert.Contains("3.1 µg/L", text);
+        Assert.Contains("10 µg/L", text);                     // the US LCRI action level (89 FR 86418)
+        Assert.Contains("Lead and Copper Rule Improvements", text, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("Tallow County Health Department", text); // from the Letters settings
+        Assert.Contains("+1 555 0140", text);
+        Assert.Contains("not medical advice", text, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("doctor", text, StringComparison.OrdinalIgnoreCase);
+        Assert.DoesNotContain("?g/L", text);                  // µ rendered, not replaced by "?"
+        Assert.DoesNotContain('\uFFFD', letter.Text);
+    }
+
+    [Fact]
+    public async Task Letter_SpanishHousehold_InSpanishUnlessAskedOtherwise()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync(h => h["language"] = "es");
+        await flow.PostLeadAsync(code, firstDraw: 4.0, flushed: 1.2);
+
+        var spanish = LetterPdfText.Read((await LetterAsync(flow.Coordinator, code)).Pdf).Flat;
+        Assert.Contains("plomo", spanish);
+        Assert.Contains("consejo médico", spanish);
+        Assert.DoesNotContain("not medical advice", spanish, StringComparison.OrdinalIgnoreCase);
+        var english = LetterPdfText.Read((await LetterAsync(flow.Coordinator, code, "en")).Pdf).Flat;
+        Assert.Contains("not medical advice", english, StringComparison.OrdinalIgnoreCase);
+        var bad = await flow.Coordinator.GetAsync($"/api/kits/{code}/letter?lang=fr");
+        Assert.Equal(HttpStatusCode.BadRequest, bad.StatusCode);
+    }
+
+    [Fact]
+    public async Task Letter_ConfirmedSent_KitLetterSentAndDaysFromCollectionKept()
+    {
+        using var app = new CommunityLeadFactory(); // clock 2026-04-10; collected 2026-04-03
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        await flow.PostLeadAsync(code, firstDraw: 2.0, flushed: 1.0);
+        var (_, response) = await LetterAsync(flow.Coordinator, code);
+        var letterId = int.Parse(response.Headers.GetValues("X-Letter-Id").Single());
+
+        var sent = await PostAsync(flow.Coordinator, $"/api/kits/{code}/letter/sent", new { letterId }, HttpStatusCode.OK);
+        Assert.Equal(7, sent["daysFromCollection"]!.GetValue<int>());
+        Assert.Equal("letter-sent", (await GetAsync(flow.Coordinator, $"/api/kits/{code}"))["state"]!.GetValue<string>());
+    }
+
+    [Fact]
+    public async Task Letter_NotRenderedYet_CannotBeMarkedSent()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        await flow.PostLeadAsync(code, firstDraw: 2.0, flushed: 1.0);
+        await PostAsync(flow.Coordinator, $"/api/kits/{code}/letter/sent", new { }, HttpStatusCode.Conflict);
+        Assert.Equal("interpreted", (await GetAsync(flow.Coordinator, $"/api/kits/{code}"))["state"]!.GetValue<string>());
+    }
+
+    [Fact]
+    public async Task Letter_StoredLetter_RendersAgainByteIdentical()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        await flow.PostLeadAsync(code, firstDraw: 6.0, flushed: 1.0);
+        var (pdf, response) = await LetterAsync(flow.Coordinator, code);
+        var id = response.Headers.GetValues("X-Letter-Id").Single();
+
+        var again = await flow.Coordinator.GetAsync($"/api/letters/{id}");
+        Assert.Equal(pdf, await again.Content.ReadAsByteArrayAsync());
+        Assert.Equal("true", again.Headers.GetValues("X-Letter-Identical").Single());
+        var listed = JsonNode.Parse(await flow.Coordinator.GetStringAsync($"/api/kits/{code}/letters"))!.AsArray();
+        Assert.Single(listed);
+        Assert.Equal("us-lcri", listed[0]!["profileId"]!.GetValue<string>());
+    }
+
+    [Fact]
+    public async Task Letter_NoResultsYet_409()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        var response = await flow.Coordinator.GetAsync($"/api/kits/{code}/letter");
+        Assert.Equal(HttpStatusCode.Conflict, response.StatusCode);
+    }
+
+    [Fact]
+    public async Task LetterBatch_EveryReadyKit_OnePdfEachManifestAndCombinedPrintFile()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var codes = new List<string>();
+        for (var i = 0; i < 3; i++)
+        {
+            var code = await flow.ReceivedKitAsync();
+            await flow.PostLeadAsync(code, firstDraw: 2.0 + i * 6, flushed: 1.0);
+            codes.Add(code);
+        }
+        var notReady = await flow.ReceivedKitAsync();
+
+        var response = await flow.Coordinator.PostAsync("/api/letters/batch?combined=true", null);
+        await Expect(response, HttpStatusCode.OK);
+        Assert.Equal("application/zip", response.Content.Headers.ContentType!.MediaType);
+        using var zip = new ZipArchive(new MemoryStream(await response.Content.ReadAsByteArrayAsync()));
+        var letters = zip.Entries.Where(e => e.FullName.StartsWith("letters/")).Select(e => e.Name).ToList();
+        Assert.Equal(3, letters.Count);
+        Assert.All(codes, c => Assert.Contains(letters, n => n.Contains(c)));
+        Assert.DoesNotContain(letters, n => n.Contains(notReady));
+        Assert.NotNull(zip.GetEntry("manifest.csv"));
+        using var combined = new MemoryStream();
+        await zip.GetEntry("all-letters.pdf")!.Open().CopyToAsync(combined);
+        Assert.True(LetterPdfText.Read(combined.ToArray()).Pages >= 3);
+        // Issuing is not sending: the kits wait for confirmation.
+        Assert.All(codes, c => Assert.Equal("interpreted",
+            app.WithDb(db => db.Kits.Single(k => k.Code == c).State.ToString().ToLowerInvariant())));
+    }
+}
