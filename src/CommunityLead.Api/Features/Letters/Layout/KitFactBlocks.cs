@@ -3,7 +3,7 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// <summary>The kit's facts as label/value pairs: labels in bold in a narrow column, values beside them.</summary>
 internal static class KitFactBlocks
 {
-    const double Gap = 10;
+    private const double Gap = 10;
 
     public static IEnumerable<Block> Build(
         TextMeasure measure, LetterFonts fonts, IReadOnlyList<LabeledValue> facts, double x, double width, double spaceBefore)

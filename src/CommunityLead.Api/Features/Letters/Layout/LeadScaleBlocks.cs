@@ -10,9 +10,9 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// </summary>
 internal static class LeadScaleBlocks
 {
-    const double BarHeight = 10;
-    const double TickOverhang = 3;
-    const double AxisGap = 5;
+    private const double BarHeight = 10;
+    private const double TickOverhang = 3;
+    private const double AxisGap = 5;
 
     public static IEnumerable<Block> Build(
         TextMeasure measure, LetterFonts fonts, LeadScale scale, LetterLanguage language, double x, double width, double spaceBefore)
@@ -22,25 +22,26 @@ internal static class LeadScaleBlocks
         foreach (var line in caption)
             yield return line;
 
+        // A scale without a usable end still gets one, so the marker and ticks have somewhere to go.
         var maximum = scale.Maximum > 0 ? scale.Maximum : Math.Max(1, scale.Levels.Select(l => l.Value).DefaultIfEmpty(1).Max());
-        var zero = "0";
+        const string zero = "0";
         var end = (ScaleNumber.Format(maximum, language) + " " + scale.Unit).Trim();
         var barLeft = x + measure.Width(zero, fonts.Small) + AxisGap;
         var barRight = x + width - measure.Width(end, fonts.Small) - AxisGap;
         double XOf(double value) => barLeft + (barRight - barLeft) * Math.Clamp(value, 0, maximum) / maximum;
 
-        var marker = ScaleMarker.Plan(measure, fonts, scale.ValueText, XOf(scale.Value), x, x + width);
-        var labelled = scale.Levels.Select(level => level with { Label = WithNumber(level, language) }).ToList();
+        var marker = ScaleMarker.Plan(measure, fonts.BodyBold, scale.ValueText, XOf(scale.Value), x, x + width);
+        var labelled = scale.Levels.Select(level => level with { Label = WithNumber(level, language) });
         var ticks = ScaleTicks.Plan(measure, fonts.Small, labelled, XOf, x, x + width);
         var barTop = marker.Height + 1;
-        var height = barTop + BarHeight + TickOverhang + 1 + ticks.Height + 2;
+        var axisTop = (BarHeight - Typeset.LineHeight(fonts.Small)) / 2;
 
-        yield return new Block(height, (g, top) =>
+        yield return new Block(barTop + BarHeight + TickOverhang + 1 + ticks.Height + 2, (g, top) =>
         {
             var bar = top + barTop;
             DrawBands(g, scale.Levels, XOf, barLeft, barRight, bar);
-            Typeset.Left(g, zero, fonts.Small, Palette.Ink, x, bar + (BarHeight - Typeset.LineHeight(fonts.Small)) / 2);
-            Typeset.Right(g, end, fonts.Small, Palette.Ink, x + width, bar + (BarHeight - Typeset.LineHeight(fonts.Small)) / 2);
+            Typeset.Left(g, zero, fonts.Small, Palette.Ink, x, bar + axisTop);
+            Typeset.Right(g, end, fonts.Small, Palette.Ink, x + width, bar + axisTop);
             ticks.Draw(g, bar - TickOverhang, bar + BarHeight + TickOverhang, bar + BarHeight + TickOverhang + 1);
             marker.Draw(g, top, bar, bar + BarHeight);
         })
@@ -48,13 +49,13 @@ internal static class LeadScaleBlocks
     }
 
     /// <summary>"Action level 10": the level's number under its tick, unless its label already says it.</summary>
-    static string WithNumber(ScaleMark level, LetterLanguage language)
+    private static string WithNumber(ScaleMark level, LetterLanguage language)
     {
         var number = ScaleNumber.Format(level.Value, language);
         return level.Label.Contains(number, StringComparison.Ordinal) ? level.Label : $"{level.Label} {number}";
     }
 
-    static void DrawBands(XGraphics g, IReadOnlyList<ScaleMark> levels, Func<double, double> xOf, double left, double right, double top)
+    private static void DrawBands(XGraphics g, IReadOnlyList<ScaleMark> levels, Func<double, double> xOf, double left, double right, double top)
     {
         var edges = levels.Select(l => xOf(l.Value)).Where(e => e > left && e < right).Order().Prepend(left).Append(right).ToArray();
         for (var i = 0; i < edges.Length - 1; i++)

@@ -6,10 +6,10 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// </summary>
 internal static class LetterBody
 {
-    const double SectionSpace = 14;
-    const double ParagraphSpace = 5;
-    const double StepIndent = 16;
-    const double StepGap = 6;
+    private const double SectionSpace = 14;
+    private const double ParagraphSpace = 5;
+    private const double StepIndent = 16;
+    private const double StepGap = 6;
 
     public static List<Block> Build(LetterContent content, PageGeometry page, LetterFonts fonts, TextMeasure measure)
     {
@@ -30,7 +30,7 @@ internal static class LetterBody
         return blocks;
     }
 
-    static IEnumerable<Block> Section(TextMeasure measure, LetterFonts fonts, LetterSection section, double x, double width)
+    private static IEnumerable<Block> Section(TextMeasure measure, LetterFonts fonts, LetterSection section, double x, double width)
     {
         if (section.Paragraphs.Count == 0)
             yield break;

@@ -11,7 +11,7 @@ internal static class LetterDate
     /// <summary>Used when the letter's date can't be read: any fixed value keeps the bytes reproducible.</summary>
     public static readonly DateTime Unreadable = new(2000, 1, 1, 0, 0, 0, DateTimeKind.Utc);
 
-    static readonly string[] SpanishMonths =
+    private static readonly string[] SpanishMonths =
         ["enero", "febrero", "marzo", "abril", "mayo", "junio", "julio", "agosto", "septiembre", "octubre", "noviembre", "diciembre"];
 
     public static DateTime MidnightOf(string date)

@@ -12,13 +12,13 @@ public sealed class LetterFontResolver : IFontResolver
     public const string FamilyName = "Liberation Sans";
 
     // Face names are keys in PDFsharp's process-wide font cache: prefixed so no other resolver's faces collide.
-    const string Regular = "LiberationSans-Regular";
-    const string Bold = "LiberationSans-Bold";
-    const string Italic = "LiberationSans-Italic";
-    const string ResourcePrefix = "CommunityLead.Api.Features.Letters.Fonts.";
+    private const string Regular = "LiberationSans-Regular";
+    private const string Bold = "LiberationSans-Bold";
+    private const string Italic = "LiberationSans-Italic";
+    private const string ResourcePrefix = "CommunityLead.Api.Features.Letters.Fonts.";
 
     // Read once: PDFsharp caches the faces itself, but a resolver must never do I/O per letter.
-    readonly Dictionary<string, byte[]> _fonts = new[] { Regular, Bold, Italic }.ToDictionary(face => face, Load);
+    private readonly Dictionary<string, byte[]> fonts = new[] { Regular, Bold, Italic }.ToDictionary(face => face, Load);
 
     public FontResolverInfo? ResolveTypeface(string familyName, bool bold, bool italic) =>
         // No bold-italic file: the letters never ask for it, and PDFsharp simulates the slant if anyone does.
@@ -30,9 +30,9 @@ public sealed class LetterFontResolver : IFontResolver
             _ => new FontResolverInfo(Regular),
         };
 
-    public byte[]? GetFont(string faceName) => _fonts.GetValueOrDefault(faceName);
+    public byte[]? GetFont(string faceName) => fonts.GetValueOrDefault(faceName);
 
-    static byte[] Load(string face)
+    private static byte[] Load(string face)
     {
         using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(ResourcePrefix + face + ".ttf")
             ?? throw new InvalidOperationException($"The embedded font {face}.ttf is missing from the build.");

@@ -8,8 +8,8 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// </summary>
 internal sealed class LetterHeader
 {
-    const double ColumnGap = 12;
-    readonly List<Action<XGraphics>> _draws = [];
+    private const double ColumnGap = 12;
+    private readonly List<Action<XGraphics>> draws = [];
 
     /// <summary>Lowest point used on the page; the body starts below it.</summary>
     public double Bottom { get; private set; }
@@ -17,8 +17,8 @@ internal sealed class LetterHeader
     public static LetterHeader Plan(LetterContent content, PageGeometry page, LetterFonts fonts, TextMeasure measure)
     {
         var header = new LetterHeader();
-        var left = new TextColumn(header._draws, measure, page.Left, page.Window.Right - page.Left, page.Top, alignRight: false);
-        var right = new TextColumn(header._draws, measure, page.Window.Right + ColumnGap, page.Right - page.Window.Right - ColumnGap,
+        var left = new TextColumn(header.draws, measure, page.Left, page.Window.Right - page.Left, page.Top, alignRight: false);
+        var right = new TextColumn(header.draws, measure, page.Window.Right + ColumnGap, page.Right - page.Window.Right - ColumnGap,
             page.Top, alignRight: true);
 
         left.Add(content.Program.Name, fonts.ProgramName, Palette.Accent);
@@ -35,7 +35,7 @@ internal sealed class LetterHeader
 
         // Drawn before the date on its line, so text pulled from the PDF (screen readers, copy and paste) reads
         // the name and then the date, not the two run together.
-        header._draws.Add(RecipientBlock.Plan(content.Recipient, page, fonts, measure).Draw);
+        header.draws.Add(RecipientBlock.Plan(content.Recipient, page, fonts, measure).Draw);
 
         // The date lines up with the recipient's name, unless the contact lines reach further down.
         right.MoveTo(Math.Max(right.Y + 10, page.Window.Top + page.WindowInset));
@@ -46,7 +46,7 @@ internal sealed class LetterHeader
 
     public void Draw(XGraphics g)
     {
-        foreach (var draw in _draws)
+        foreach (var draw in draws)
             draw(g);
     }
 }

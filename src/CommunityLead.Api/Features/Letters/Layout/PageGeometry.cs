@@ -10,8 +10,8 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// <param name="WindowInset">How far the address stays inside the window's edges: a folded letter shifts in its envelope.</param>
 internal sealed record PageGeometry(PageSize Size, double Width, double Height, double Margin, XRect Window, double WindowInset)
 {
-    const double Inch = 72;
-    const double Mm = Inch / 25.4;
+    private const double Inch = 72;
+    private const double Mm = Inch / 25.4;
 
     // US Letter, folded in three for a #10 window envelope. Window 4.5 × 1.125 in, its left edge 7/8 in from the
     // sheet's left and its top 2 in from the sheet's top (common practice for #10 window envelopes; from memory,

@@ -37,7 +37,7 @@ internal static class Paginator
     }
 
     /// <summary>Height of the block and those it must stay with, as if set one after the other.</summary>
-    static double GroupHeight(IReadOnlyList<Block> blocks, int start)
+    private static double GroupHeight(IReadOnlyList<Block> blocks, int start)
     {
         var height = blocks[start].Height;
         for (var i = start; blocks[i].KeepWithNext && i + 1 < blocks.Count; i++)

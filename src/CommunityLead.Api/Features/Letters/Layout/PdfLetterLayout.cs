@@ -9,7 +9,7 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// </summary>
 public sealed class PdfLetterLayout : ILetterLayout
 {
-    const double BodyGap = 20;
+    private const double BodyGap = 20;
 
     public string ContentType => "application/pdf";
 

@@ -14,7 +14,7 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// </summary>
 internal static partial class ReproduciblePdf
 {
-    const string ZeroUuid = "00000000-0000-0000-0000-000000000000";
+    private const string ZeroUuid = "00000000-0000-0000-0000-000000000000";
 
     public static byte[] Save(PdfDocument document, LetterContent content)
     {
@@ -34,10 +34,10 @@ internal static partial class ReproduciblePdf
     }
 
     // "Your water test results — Kit code K7QM-4T2X": the composer puts the kit code first among the facts.
-    static string DocumentTitle(LetterContent content) =>
+    private static string DocumentTitle(LetterContent content) =>
         content.KitFacts.Count == 0 ? content.Title : $"{content.Title} — {content.KitFacts[0].Label} {content.KitFacts[0].Value}";
 
-    static void Normalise(byte[] bytes)
+    private static void Normalise(byte[] bytes)
     {
         // Latin-1 maps byte n to char n, so offsets in the string are offsets in the file.
         var text = Encoding.Latin1.GetString(bytes);
@@ -66,13 +66,13 @@ internal static partial class ReproduciblePdf
     }
 
     /// <summary>Six capital letters, different for each subset in the file and for each letter's file.</summary>
-    static string Tag(byte[] digest, int face)
+    private static string Tag(byte[] digest, int face)
     {
         var hash = SHA256.HashData([.. digest, (byte)face]);
         return new string(hash.Take(6).Select(b => (char)('A' + b % 26)).ToArray());
     }
 
-    static void Write(byte[] bytes, int offset, string ascii) => Encoding.ASCII.GetBytes(ascii, 0, ascii.Length, bytes, offset);
+    private static void Write(byte[] bytes, int offset, string ascii) => Encoding.ASCII.GetBytes(ascii, 0, ascii.Length, bytes, offset);
 
     [GeneratedRegex(@"/(?:BaseFont|FontName)\s*/(?<tag>[A-Z]{6})\+")]
     private static partial Regex SubsetTag();

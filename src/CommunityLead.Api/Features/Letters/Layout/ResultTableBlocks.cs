@@ -9,8 +9,8 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// </summary>
 internal static class ResultTableBlocks
 {
-    const double PadX = 4;
-    const double PadY = 3.5;
+    private const double PadX = 4;
+    private const double PadY = 3.5;
 
     public static IEnumerable<Block> Build(
         TextMeasure measure, LetterFonts fonts, ResultTable table, double x, double width, double spaceBefore)
@@ -33,7 +33,7 @@ internal static class ResultTableBlocks
                 yield return line;
     }
 
-    static Block Row(TextMeasure measure, IReadOnlyList<string> cells, XFont font, double x, double[] widths, bool isHeader, bool isLast)
+    private static Block Row(TextMeasure measure, IReadOnlyList<string> cells, XFont font, double x, double[] widths, bool isHeader, bool isLast)
     {
         var wrapped = widths.Select((w, c) => measure.Wrap(c < cells.Count ? cells[c] : "", font, w - 2 * PadX)).ToArray();
         var lineHeight = Typeset.LineHeight(font);

@@ -29,7 +29,9 @@ internal sealed class ScaleTicks(List<ScaleTicks.Label> labels, double[] rowTops
             var row = rowEnds.FindIndex(end => end + LabelGap <= labelLeft);
             if (row < 0)
             {
-                (row, rowEnds, rowLines) = (rowEnds.Count, [.. rowEnds, 0], [.. rowLines, 0]);
+                row = rowEnds.Count;
+                rowEnds.Add(0);
+                rowLines.Add(0);
             }
             rowEnds[row] = labelLeft + width;
             rowLines[row] = Math.Max(rowLines[row], lines.Count);

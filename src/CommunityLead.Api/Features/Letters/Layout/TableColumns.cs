@@ -32,7 +32,7 @@ internal static class TableColumns
         return Squeezed(natural, minimum, width);
     }
 
-    static double[] Squeezed(double[] natural, double[] minimum, double width)
+    private static double[] Squeezed(double[] natural, double[] minimum, double width)
     {
         // Columns that want no more than an even share of the room left keep their natural width; repeat, since
         // each one settled leaves more for the rest.

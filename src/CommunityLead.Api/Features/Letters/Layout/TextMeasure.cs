@@ -22,7 +22,9 @@ internal sealed class TextMeasure(XGraphics measure)
             var lineWidth = 0.0;
             foreach (var unit in Units(hardLine))
             {
-                IEnumerable<string> pieces = Width(unit, font) <= width ? [unit] : unit.Split(' ').SelectMany(word => FitWord(word, font, width));
+                IEnumerable<string> pieces = Width(unit, font) <= width
+                    ? [unit]
+                    : unit.Split(' ').SelectMany(word => FitWord(word, font, width));
                 foreach (var piece in pieces)
                 {
                     var pieceWidth = Width(piece, font);
@@ -58,7 +60,7 @@ internal sealed class TextMeasure(XGraphics measure)
         return units;
     }
 
-    IEnumerable<string> FitWord(string word, XFont font, double width)
+    private IEnumerable<string> FitWord(string word, XFont font, double width)
     {
         while (word.Length > 1 && Width(word, font) > width)
         {

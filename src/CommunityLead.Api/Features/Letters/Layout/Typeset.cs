@@ -5,10 +5,9 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// <summary>Draws single lines of text in a line box: top edge in, baseline worked out from the font's metrics.</summary>
 internal static class Typeset
 {
-    const double Leading = 1.32;
+    private const double Leading = 1.32;
 
-    static readonly XStringFormat RightAligned = XStringFormats.BaseLineRight;
-    static readonly XStringFormat CentreAligned = XStringFormats.BaseLineCenter;
+    private static readonly XStringFormat RightAligned = XStringFormats.BaseLineRight;
 
     public static double LineHeight(XFont font) => font.Size * Leading;
 
@@ -25,7 +24,4 @@ internal static class Typeset
 
     public static void Right(XGraphics g, string text, XFont font, XBrush brush, double right, double top) =>
         g.DrawString(text, font, brush, right, Baseline(font, top), RightAligned);
-
-    public static void Centre(XGraphics g, string text, XFont font, XBrush brush, double centre, double top) =>
-        g.DrawString(text, font, brush, centre, Baseline(font, top), CentreAligned);
 }

@@ -54,4 +54,13 @@ public class LetterEdgeTests
     {
         Assert.Single(RenderedLetter.Of(OddLetters.Retest()).PageTexts);
     }
+
+    [Fact]
+    public void Render_EverythingEmpty_StillOnePageWithItsPageNumber()
+    {
+        var letter = RenderedLetter.Of(OddLetters.Empty());
+
+        Assert.Single(letter.PageTexts);
+        Assert.Contains("Page 1 of 1", letter.Text);
+    }
 }

@@ -90,15 +90,15 @@ public static class LetterSamples
         new ResultTable(
             ["Muestra", "Análisis", "Resultado", "Comparado con"],
             [
-                ["Primera agua del grifo (primera extracción)", "Plomo", "6,8 µg/L", "Nivel de precaución: 5 µg/L"],
+                ["Primera agua del grifo (primera extracción)", "Plomo", "6.8 µg/L", "Nivel de precaución: 5 µg/L"],
                 ["Después de dejar correr el agua", "Plomo", "No detectado (menos de 1 µg/L)", "Nivel de acción: 10 µg/L"],
             ],
             "Cada resultado se compara con el nivel que aparece a su lado. Un resultado ≤ 1 µg/L no se puede medir. Estos niveles provienen de: EPA de EE. UU. — Mejoras a la Norma de Plomo y Cobre (2024)."),
-        [new LeadScale("Primera agua del grifo (primera extracción)", 6.8, "6,8 µg/L",
+        [new LeadScale("Primera agua del grifo (primera extracción)", 6.8, "6.8 µg/L",
             [new(5, "Nivel de precaución"), new(10, "Nivel de acción")], 15, "µg/L")],
         new LetterSection("Qué significan sus resultados",
         [
-            "La primera agua de su grifo tenía 6,8 µg/L de plomo. Nuestro nivel de precaución es de 5 µg/L, y este resultado lo alcanza o lo supera.",
+            "La primera agua de su grifo tenía 6.8 µg/L de plomo. Nuestro nivel de precaución es de 5 µg/L, y este resultado lo alcanza o lo supera.",
             "¿Por qué importa? No se conoce ninguna cantidad de plomo que sea segura para los niños y las niñas.",
         ]),
         new LetterSection("Qué hacer ahora",

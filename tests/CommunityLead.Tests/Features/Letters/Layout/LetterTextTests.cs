@@ -46,7 +46,7 @@ public class LetterTextTests
     {
         var letter = RenderedLetter.Of(LetterSamples.Spanish());
 
-        foreach (var text in new[] { "José Ángel Muñoz Peña", "6,8 µg/L", "≤ 1 µg/L", "¿Por qué importa?", "EE. UU. — Mejoras", "¡Gracias por participar!", "Página 1 de 2" })
+        foreach (var text in new[] { "José Ángel Muñoz Peña", "6.8 µg/L", "≤ 1 µg/L", "¿Por qué importa?", "EE. UU. — Mejoras", "¡Gracias por participar!", "Página 1 de 2" })
             Assert.Contains(text, letter.Text);
     }
 
@@ -60,5 +60,19 @@ public class LetterTextTests
         Assert.Contains("25 µg/L", letter.Text);
         Assert.Contains("Page 1 of 2", letter.Text);
         Assert.Contains("Page 2 of 2", letter.Text);
+    }
+
+    [Fact]
+    public void Render_SoilScale_NumbersWrittenLikeTheLettersSentences()
+    {
+        var content = LetterSamples.EnglishActionLevel() with
+        {
+            Scales = [new LeadScale("Garden soil", 150, "150 mg/kg", [new(1200, "Level for this place")], 2000, "mg/kg")],
+        };
+
+        var letter = RenderedLetter.Of(content);
+
+        Assert.Contains("Level for this place 1,200", letter.Text);
+        Assert.Contains("2,000 mg/kg", letter.Text);
     }
 }

@@ -1,4 +1,5 @@
 using CommunityLead.Api.Features.Letters;
+using CommunityLead.Rules.Households;
 
 namespace CommunityLead.Tests.Features.Letters.Layout;
 
@@ -31,4 +32,10 @@ public static class OddLetters
         ],
         Closing = "See https://riverbend.example.org/lead-testing/results/explained/for-households/what-your-numbers-mean-and-what-to-do-next for more.",
     };
+
+    /// <summary>Every optional part left empty: the layout must still make a valid one-page letter.</summary>
+    public static LetterContent Empty() => new(
+        LetterLanguage.En, LetterKind.Results, PaperSize.Letter, new ProgramBlock("", [], []), "", [], "", [],
+        new ResultTable([], [], ""), [], new LetterSection("", []), new LetterSection("", [], Numbered: true),
+        new LetterSection("", []), new LetterSection("", []), "", "");
 }
