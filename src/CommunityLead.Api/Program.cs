@@ -6,6 +6,7 @@ using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
+using CommunityLead.Api.Features.Reports;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
 
@@ -45,6 +46,7 @@ app.MapLabResults();
 app.MapInterpretation();
 app.MapLetters();
 app.MapAttention();
+app.MapReports();
 app.MapAdmin();
 
 await app.RunAsync();

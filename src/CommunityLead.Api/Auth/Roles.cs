@@ -22,6 +22,7 @@ public static class Policies
     public const string KitReceiver = "kit-receiver";
     public const string Lab = "lab";
     public const string LabReader = "lab-reader";
+    public const string Health = "health";
     public const string Admin = "admin";
 
     public static void Add(Microsoft.AspNetCore.Authorization.AuthorizationOptions options)
@@ -31,6 +32,7 @@ public static class Policies
         options.AddPolicy(KitReceiver, p => p.RequireRole(Roles.Coordinator, Roles.Lab));
         options.AddPolicy(Lab, p => p.RequireRole(Roles.Lab));
         options.AddPolicy(LabReader, p => p.RequireRole(Roles.Lab, Roles.Coordinator));
+        options.AddPolicy(Health, p => p.RequireRole(Roles.Health));
         options.AddPolicy(Admin, p => p.RequireRole(Roles.Admin));
         // Nothing is open without a key unless it says so (/health). That every route names its own policy
         // is checked by the role-matrix test, which fails on any route it has no expectation for.

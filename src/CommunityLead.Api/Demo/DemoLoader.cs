@@ -98,6 +98,7 @@ public static class DemoLoader
             var review = CollectionRecording.Review(kit.Kind, c.Samples, c.RecordedAt, limits);
             Move(db, kit, KitAction.RecordCollection, c.RecordedAt.UtcDateTime, null, CollectionRecording.Describe(c.Samples.Count, review));
             kit.Collections.Add(CollectionRecording.NewCollection(0, c.Samples, review, c.RecordedAt.UtcDateTime, Loader.Label));
+            kit.CollectedAtUtc = c.Samples.Min(s => s.CollectedAt!.Value.UtcDateTime);
         }
         if (d.ReceivedAt is { } received)
         {

@@ -4,6 +4,7 @@ using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Letters.Composing;
 using CommunityLead.Api.Features.Letters.Layout;
+using CommunityLead.Api.Features.Reports;
 using CommunityLead.Rules.Sampling;
 using FluentValidation;
 using Microsoft.AspNetCore.Authentication;
@@ -21,6 +22,7 @@ public static class ServiceSetup
         services.Configure<SamplingLimits>(builder.Configuration.GetSection("Sampling"));
         services.Configure<LabIntakeOptions>(builder.Configuration.GetSection("LabIntake"));
         services.Configure<InterpretationOptions>(builder.Configuration.GetSection("Interpretation"));
+        services.Configure<ReportOptions>(builder.Configuration.GetSection("Reports"));
         services.AddSingleton<ProfileCatalog>();
         services.AddScoped<InterpretAfterResults>();
         services.AddSingleton(builder.Configuration.GetSection("Letters").Get<LetterSettings>()

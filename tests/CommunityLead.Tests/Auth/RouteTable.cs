@@ -75,6 +75,8 @@ public static class RouteTable
         ["POST /api/kits/{code}/interpretation/"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Post, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/interpretation")),
 
+        ["GET /api/reports/summary"] = Allow([Roles.Health], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/reports/summary?groupBy=area")),
+
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["GET /api/admin/audit"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/audit?pageSize=10")),
     };

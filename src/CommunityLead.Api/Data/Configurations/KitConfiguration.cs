@@ -11,6 +11,7 @@ public class KitConfiguration : IEntityTypeConfiguration<Kit>
         b.Property(k => k.Code).HasMaxLength(16);
         b.HasIndex(k => k.Code).IsUnique();
         b.HasIndex(k => new { k.State, k.UpdatedAtUtc });
+        b.HasIndex(k => k.CollectedAtUtc);
         b.Property(k => k.StateReason).HasMaxLength(500);
         b.Property(k => k.ReplacesCode).HasMaxLength(16);
         b.Property(k => k.ReplacedByCode).HasMaxLength(16);

@@ -1,3 +1,4 @@
+using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
 
 namespace CommunityLead.Api.Data.Entities;
@@ -17,6 +18,12 @@ public class Kit
     public string? StateReason { get; set; }
     public string? ReplacesCode { get; set; }
     public string? ReplacedByCode { get; set; }
+    /// <summary>When the first bottle of the current collection was taken (UTC): the report period's date.</summary>
+    public DateTime? CollectedAtUtc { get; set; }
+    /// <summary>The current interpretation's bands, kept here so reports count in one GROUP BY.</summary>
+    public Band? Band { get; set; }
+    public Band? LeadBand { get; set; }
+    public Band? CopperBand { get; set; }
     /// <summary>Bumped on every change so two people moving the same kit at once can't both win.</summary>
     public int Version { get; set; }
     public List<Collection> Collections { get; set; } = [];

@@ -382,9 +382,20 @@ namespace CommunityLead.Api.Data.Migrations
                         .ValueGeneratedOnAdd()
                         .HasColumnType("INTEGER");
 
+                    b.Property<string>("Band")
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("Code")
                         .IsRequired()
                         .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTime?>("CollectedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("CopperBand")
+                        .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
                     b.Property<Guid>("HouseholdId")
@@ -395,6 +406,10 @@ namespace CommunityLead.Api.Data.Migrations
 
                     b.Property<string>("Kind")
                         .IsRequired()
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("LeadBand")
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
@@ -429,6 +444,8 @@ namespace CommunityLead.Api.Data.Migrations
 
                     b.HasIndex("Code")
                         .IsUnique();
+
+                    b.HasIndex("CollectedAtUtc");
 
                     b.HasIndex("HouseholdId");
 

@@ -6,6 +6,7 @@ using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
+using CommunityLead.Rules.LabResults;
 using Microsoft.EntityFrameworkCore;
 using KitOutcome = CommunityLead.Rules.Interpretation.Interpretation;
 
@@ -49,11 +50,20 @@ public static class KitInterpreting
                 KitId = kit.Id, KitCode = kit.Code, Band = outcome.Band, ProfileId = profile.Id, ProfileVersion = profile.Version,
                 OutcomeJson = JsonSerializer.Serialize(outcome, json), CreatedAtUtc = nowUtc, CreatedBy = actor.Label,
             });
+            (kit.Band, kit.LeadBand, kit.CopperBand) = (outcome.Band, BandOf(outcome, Analyte.Lead), BandOf(outcome, Analyte.Copper));
             KitTransitions.Apply(db, kit, KitAction.Interpret, actor, nowUtc,
                 detail: $"band {KebabEnum.Name(outcome.Band)}, profile {profile.Id} v{profile.Version}");
             foreach (var flag in outcome.Flags.Where(f => f != AttentionFlag.CorrectedAfterLetter))
                 db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, flag, AttentionText.For(flag, outcome), nowUtc));
         }
         return outcomes;
+    }
+
+    /// <summary>An analyte's band for the reports: retest for the whole kit, else its most serious finding; null if not measured.</summary>
+    private static Band? BandOf(KitOutcome outcome, Analyte analyte)
+    {
+        var findings = outcome.Findings.Where(f => f.Analyte == analyte).ToList();
+        if (findings.Count == 0) return null;
+        return outcome.Band == Band.Retest ? Band.Retest : findings.Max(f => f.Band);
     }
 }

@@ -33,6 +33,7 @@ public static class CollectionRecording
             return illegal;
 
         await SupersedeAsync(db, kit.Id, now.UtcDateTime, ct);
+        kit.CollectedAtUtc = samples.Min(s => s.CollectedAt!.Value.UtcDateTime);
         db.Collections.Add(NewCollection(kit.Id, samples, review, now.UtcDateTime, actor.Label));
         return await KitMoves.SaveAndReadAsync(db, kit.Code, actor, ct);
     }

@@ -1,0 +1,14 @@
+using CommunityLead.Rules.Reports;
+
+namespace CommunityLead.Api.Features.Reports;
+
+/// <summary>Settings of the "Reports" section.</summary>
+public sealed class ReportOptions
+{
+    /// <summary>Counts from 1 to this are never shown (zero may be), after the CMS cell size suppression policy.</summary>
+    public int SuppressionThreshold { get; set; } = CellSuppression.DefaultThreshold;
+    /// <summary>No federal rule says how to take the 90th percentile when 0.9·n is not whole; this is the program's choice.</summary>
+    public NinetiethRounding NinetiethRounding { get; set; } = NinetiethPercentile.DefaultRounding;
+    /// <summary>Exactly five samples: the mean of the two highest (the rule for systems serving 100 people or fewer).</summary>
+    public bool FiveSampleRule { get; set; } = true;
+}
