@@ -35,19 +35,25 @@ public class CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : DbCont
 
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {
-        GuardAuditTrail();
+        BeforeSave();
         return base.SaveChanges(acceptAllChangesOnSuccess);
     }
 
     public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
     {
-        GuardAuditTrail();
+        BeforeSave();
         return base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken);
     }
 
-    // The triggers in the database are the real guard; this fails earlier with a clearer message.
-    private void GuardAuditTrail()
+    private void BeforeSave()
     {
+        // Every kit's report period follows its dates, whichever feature changed them.
+        foreach (var kit in ChangeTracker.Entries<Kit>().Where(e => e.State is EntityState.Added or EntityState.Modified))
+        {
+            var date = kit.Entity.CollectedAtUtc ?? kit.Entity.IssuedAtUtc;
+            kit.Entity.PeriodMonth = date.Year * 100 + date.Month;
+        }
+        // The triggers in the database are the real guard; this fails earlier with a clearer message.
         if (ChangeTracker.Entries<AuditEntry>().Any(e => e.State is EntityState.Modified or EntityState.Deleted))
             throw new InvalidOperationException("The audit trail is append-only.");
     }

@@ -12,6 +12,7 @@ public class KitConfiguration : IEntityTypeConfiguration<Kit>
         b.HasIndex(k => k.Code).IsUnique();
         b.HasIndex(k => new { k.State, k.UpdatedAtUtc });
         b.HasIndex(k => k.CollectedAtUtc);
+        b.HasIndex(k => k.PeriodMonth);
         b.Property(k => k.StateReason).HasMaxLength(500);
         b.Property(k => k.ReplacesCode).HasMaxLength(16);
         b.Property(k => k.ReplacedByCode).HasMaxLength(16);

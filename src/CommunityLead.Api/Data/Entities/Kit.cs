@@ -20,6 +20,11 @@ public class Kit
     public string? ReplacedByCode { get; set; }
     /// <summary>When the first bottle of the current collection was taken (UTC): the report period's date.</summary>
     public DateTime? CollectedAtUtc { get; set; }
+    /// <summary>
+    /// The report period as yyyymm (collection month, else issue month), kept by the DbContext on every save so
+    /// monthly and quarterly reports group on a plain integer.
+    /// </summary>
+    public int PeriodMonth { get; set; }
     /// <summary>The current interpretation's bands, kept here so reports count in one GROUP BY.</summary>
     public Band? Band { get; set; }
     public Band? LeadBand { get; set; }

@@ -413,6 +413,9 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
+                    b.Property<int>("PeriodMonth")
+                        .HasColumnType("INTEGER");
+
                     b.Property<DateTimeOffset?>("ReceivedAt")
                         .HasColumnType("TEXT");
 
@@ -448,6 +451,8 @@ namespace CommunityLead.Api.Data.Migrations
                     b.HasIndex("CollectedAtUtc");
 
                     b.HasIndex("HouseholdId");
+
+                    b.HasIndex("PeriodMonth");
 
                     b.HasIndex("State", "UpdatedAtUtc");
 
