@@ -12,7 +12,7 @@ namespace CommunityLead.Rules.Reading;
 ///   ("uses", "boxes", "places", "tables" = 2);
 ///   -ely after a consonant loses its e ("safely" = 2);
 ///   a vowel before a final -ing starts a new syllable ("being" = 2, "going" = 2).
-///   Known misses: words where two vowels side by side are sounded apart ("area", "idea", "video", "quiet") count
+///   Known misses: words where two vowels side by side are sounded apart ("area", "idea", "quiet") count
 ///   one syllable short; "every" and "maybe" count one too many.
 /// - Letters with no vowel are abbreviations or unit symbols, read letter by letter: one syllable each
 ///   ("NSF" = 3, "µg/L" = 2 + 1 = 3, "mg/kg" = 4).
