@@ -7,7 +7,8 @@ namespace CommunityLead.Rules.Interpretation;
 public static partial class Interpreter
 {
     /// <summary>
-    /// One water bottle and analyte. Below the reporting limit → NotDetected (censored: we never call it zero).
+    /// One water bottle and analyte. Below the reporting limit → NotDetected (censored: we never call it zero),
+    /// unless the limit itself reaches the lowest level in effect: then Advisory, since the test could not see low enough.
     /// Otherwise the highest threshold reached: Urgent (lead only), Action, Advisory (the caution level, or copper's
     /// taste level), else Low. The level recorded is the one reached, or for Low and NotDetected the lowest level
     /// in effect (what the value is below).
@@ -16,7 +17,11 @@ public static partial class Interpreter
     {
         var t = levels.Water(result.Analyte);
         var unit = Analytes.NormalUnit(result.Analyte, Matrix.Water);
-        var (band, level, taste) = result.BelowReportingLimit ? (Band.NotDetected, t.Lowest, false) : result.Value switch
+        // "< RL" with the limit at or above the lowest level says nothing about that level: the result could be just
+        // under it. Calling it "not detected" would reassure wrongly, so it is judged as the caution band instead.
+        var blind = result.BelowReportingLimit && t.Lowest is { } lowest && AtOrAbove(result.ReportingLimit, lowest.Value);
+        var (band, level, taste) = blind ? (Band.Advisory, t.Lowest, false)
+            : result.BelowReportingLimit ? (Band.NotDetected, t.Lowest, false) : result.Value switch
         {
             var v when t.Urgent is { } u && AtOrAbove(v, u.Value) => (Band.Urgent, u, false),
             var v when t.Action is { } a && AtOrAbove(v, a.Value) => (Band.Action, a, false),
@@ -35,8 +40,8 @@ public static partial class Interpreter
     /// with a lab sample (DOMAIN.md §5 [practice; no published rule]). Without σ (or σ = 0) the value is compared
     /// directly, and equal counts as above, as everywhere else. Bands: Above → Action, Inconclusive → Advisory
     /// (not known to be above, but not safe to call low before the lab confirms), Below → Low.
-    /// Below the reporting limit → NotDetected; compared as Below when the limit is under the level, else
-    /// Inconclusive (the test can't see low enough to tell).
+    /// Below the reporting limit → NotDetected when the limit is under the level (compared as Below), else
+    /// Inconclusive and Advisory (the test can't see low enough to tell).
     /// </summary>
     private static Judged JudgeSoil(BottleResult result, Levels levels, HouseholdContext household)
     {
@@ -47,7 +52,7 @@ public static partial class Interpreter
             : margin is { } m ? (result.Value - m > level.Value ? SoilComparison.Above
                 : result.Value + m < level.Value ? SoilComparison.Below : SoilComparison.Inconclusive)
             : AtOrAbove(result.Value, level.Value) ? SoilComparison.Above : SoilComparison.Below;
-        var band = result.BelowReportingLimit ? Band.NotDetected : comparison switch
+        var band = result.BelowReportingLimit && comparison != SoilComparison.Inconclusive ? Band.NotDetected : comparison switch
         {
             SoilComparison.Above => Band.Action,
             SoilComparison.Inconclusive => Band.Advisory,

@@ -35,7 +35,8 @@ public static partial class Interpreter
             yield break;
         }
 
-        yield return f.Band switch
+        // A result below the reporting limit is reported as such, whatever band the limit puts it in.
+        yield return f.BelowReportingLimit ? MessageCatalog.ResultNotDetected.Fill(values) : f.Band switch
         {
             Band.NotDetected => MessageCatalog.ResultNotDetected.Fill(values),
             Band.Low when f.LevelValue is null => MessageCatalog.ResultMeasured.Fill(values),

@@ -27,6 +27,9 @@ public static partial class Interpreter
         {
             Band.NotDetected => MessageCatalog.WaterNotDetected,
             Band.Low => MessageCatalog.WaterLow,
+            // Advisory only because the test could not see low enough: say that, not "at or above".
+            Band.Advisory when !lead.Any(f => f.Band >= Band.Advisory && !f.BelowReportingLimit)
+                && !findings.Any(f => f.Analyte != Analyte.Lead && f.Band >= Band.Advisory) => MessageCatalog.WaterCannotTell,
             Band.Advisory => MessageCatalog.WaterAdvisory,
             Band.Action => MessageCatalog.WaterAction,
             Band.Urgent => MessageCatalog.WaterUrgent,

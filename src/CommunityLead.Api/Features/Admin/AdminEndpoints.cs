@@ -39,8 +39,9 @@ public static class AdminEndpoints
         var query = db.AuditTrail.AsNoTracking().Where(a => a.Id > after);
         if (subject is not null) query = query.Where(a => a.Subject == subject);
         var items = await query.OrderBy(a => a.Id).Take(pageSize)
-            .Select(a => new AuditListing(a.Id, a.AtUtc, a.ActorLabel, a.ActorRole, a.Subject, a.SubjectKey, a.Action,
-                a.FromState, a.ToState, a.Reason, a.Detail))
+            // Admin sees no personal data: household ids are withheld, and reasons (free text that may name people) too.
+            .Select(a => new AuditListing(a.Id, a.AtUtc, a.ActorLabel, a.ActorRole, a.Subject,
+                a.Subject == "household" ? "(withheld)" : a.SubjectKey, a.Action, a.FromState, a.ToState, null, a.Detail))
             .ToListAsync(ct);
         return TypedResults.Ok(new AuditPage(items, items.Count == pageSize ? items[^1].Id : null));
     }

@@ -42,7 +42,7 @@ public static class InterpretationEndpoints
             return TypedResults.Problem(statusCode: 409, title: "This kit has no results yet.",
                 detail: $"Kit {kit.Code} is {KebabEnum.Name(kit.State)}; it is interpreted once the lab's results are in.",
                 extensions: new Dictionary<string, object?> { ["currentState"] = KebabEnum.Name(kit.State) });
-        var facts = (await KitFactsLoader.LoadAsync(db, [kit.Id], ct))[kit.Id];
+        var facts = (await KitFactsLoader.LoadAsync(db, [kit.Id], ct, includeHeld: true))[kit.Id];
         var profile = catalog.For(kit.Kind);
         var outcome = CommunityLead.Rules.Interpretation.Interpreter.Interpret(facts, profile, catalog.ProgramRules);
         return TypedResults.Ok(Response(kit.Code, outcome, new ProfileRef(profile.Id, profile.Version), null, provisional: true));

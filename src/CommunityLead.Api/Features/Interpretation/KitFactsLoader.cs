@@ -12,7 +12,12 @@ namespace CommunityLead.Api.Features.Interpretation;
 /// </summary>
 public static class KitFactsLoader
 {
-    public static async Task<Dictionary<int, KitFacts>> LoadAsync(CommunityLeadDb db, IReadOnlyCollection<int> kitIds, CancellationToken ct)
+    /// <param name="includeHeld">
+    /// Only for the coordinator's provisional view: results of a batch held by QC, and a "QC held" reason. A stored
+    /// interpretation (and so a letter) never uses held results, as the README promises.
+    /// </param>
+    public static async Task<Dictionary<int, KitFacts>> LoadAsync(CommunityLeadDb db, IReadOnlyCollection<int> kitIds, CancellationToken ct,
+        bool includeHeld = false)
     {
         var kits = await db.Kits.AsNoTracking().Where(k => kitIds.Contains(k.Id))
             .Select(k => new
@@ -47,7 +52,9 @@ public static class KitFactsLoader
             // Results in effect win; a held result is used only where nothing in effect covers that bottle and analyte.
             var inEffect = results[kit.Id].Where(r => r.Status != BatchStatus.Held).Select(r => r.Result).ToList();
             var covered = inEffect.Select(Key).ToHashSet();
-            var held = results[kit.Id].Where(r => r.Status == BatchStatus.Held && !covered.Contains(Key(r.Result))).ToList();
+            var held = includeHeld
+                ? results[kit.Id].Where(r => r.Status == BatchStatus.Held && !covered.Contains(Key(r.Result))).ToList()
+                : [];
             foreach (var batchId in held.Select(h => h.BatchId).Distinct())
                 validity.Add(new(ValidityIssueCode.QcHeld, $"Batch {batchId} failed the lab's quality checks and is held."));
             if (inEffect.Concat(held.Select(h => h.Result)).Any(r => r.HoldingFlags is not null))

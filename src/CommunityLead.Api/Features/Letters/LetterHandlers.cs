@@ -50,6 +50,13 @@ public static class LetterHandlers
         if (letter is null)
             return TypedResults.Problem(statusCode: 409, title: "No letter to confirm.",
                 detail: $"Render the letter for kit {kit.Code} first (GET /api/kits/{kit.Code}/letter), then confirm it was sent.");
+        // An old letter must not close a corrected result, and a confirmed one keeps its first sending date.
+        if (letter.InterpretationId != current)
+            return TypedResults.Problem(statusCode: 409, title: "This letter is out of date.",
+                detail: $"Letter {letter.Id} was written for an earlier interpretation of kit {kit.Code}. Render the current letter and confirm that one.");
+        if (letter.SentAtUtc is not null)
+            return TypedResults.Problem(statusCode: 409, title: "This letter was already confirmed as sent.",
+                detail: $"Letter {letter.Id} was confirmed on {letter.SentAtUtc:yyyy-MM-dd} by {letter.SentBy}.");
         var now = clock.GetUtcNow().UtcDateTime;
         var actor = Actor.From(http.User);
         if (KitTransitions.Apply(db, kit, KitAction.SendLetter, actor, now,

@@ -62,7 +62,7 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
                 household.ChildUnder6 || household.Pregnant, settings, levels);
             var pdf = layout.Render(content);
             var hash = Convert.ToHexStringLower(SHA256.HashData(pdf));
-            var record = await db.Letters.FirstOrDefaultAsync(l => l.KitId == kit.Id && l.Sha256 == hash, ct);
+            var record = await db.Letters.FirstOrDefaultAsync(l => l.KitId == kit.Id && l.Sha256 == hash && l.InterpretationId == stored.Id, ct);
             if (record is null)
             {
                 record = new IssuedLetter

@@ -39,6 +39,9 @@ public sealed record SummaryRequest(
         }
         var from = Date("from");
         var to = Date("to");
+        // Whole months only: two reports a day apart would otherwise reveal, by their difference, a count too small to show.
+        if (from is { Day: not 1 }) errors["from"] = ["Reports start on the first day of a month, like 2026-04-01."];
+        if (to is { } t && t.AddDays(1).Day != 1) errors["to"] = ["Reports end on the last day of a month, like 2026-06-30."];
         if (from > to) errors["to"] = ["'to' is before 'from'."];
         var groupBy = Enum<SummaryGrouping>("groupBy") ?? SummaryGrouping.Area;
         var format = q["format"].ToString();

@@ -34,6 +34,10 @@ public static partial class MessageCatalog
         "At least one result is at or above our caution level. It is below the action level. Please take the steps below.",
         "Al menos un resultado llega a nuestro nivel de precaución o lo supera, aunque no alcanza el nivel de acción. Le pedimos que siga los pasos de abajo.");
 
+    public static readonly MessageTemplate WaterCannotTell = new("summary.water.cannot-tell",
+        "The lab test could not measure lead low enough to compare with our level. Please take the steps below. We will call you about a new test.",
+        "La prueba del laboratorio no pudo medir el plomo tan bajo como para compararlo con nuestro nivel. Por favor, siga los pasos de abajo. Le llamaremos para hacer una nueva prueba.");
+
     public static readonly MessageTemplate WaterAction = new("summary.water.action",
         "At least one result is at or above the action level. Please start the steps below today. We will call you to offer help.",
         "Al menos un resultado llega al nivel de acción o lo supera. Por favor, empiece hoy mismo con los pasos de abajo. Le vamos a llamar para ofrecerle ayuda.");

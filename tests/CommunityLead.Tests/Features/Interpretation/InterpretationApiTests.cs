@@ -173,3 +173,28 @@ internal static class AttentionClient
     public static async Task<JsonArray> GetFromJsonAsyncArray(this HttpClient client, string path) =>
         JsonNode.Parse(await client.GetStringAsync(path))!.AsArray();
 }
+
+public class HeldResultsTests
+{
+    [Fact]
+    public async Task Interpretation_HeldCopperThenAcceptedLead_StoredOneIgnoresTheHeldBatch()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        // A copper batch fails QC (calibration check at 70 %): held, kept out of interpretation and letters.
+        var held = await PostAsync(flow.Lab, "/api/lab/batches", new
+        {
+            batchId = "CU-HELD-1", method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
+            results = new[] { new { kitCode = code, bottle = "first-draw", analyte = "copper", value = 0.2, unit = "mg/L", mdl = 0.002, reportingLimit = 0.005 } },
+            qc = new[] { new { type = "calibration-check", analyte = "copper", expected = 1.0, measured = 0.7, unit = "mg/L" } },
+        }, HttpStatusCode.Created);
+        Assert.Equal("held", held["status"]!.GetValue<string>());
+        await flow.PostLeadAsync(code, firstDraw: 25, flushed: 3);
+
+        var result = await flow.InterpretationAsync(code);
+        Assert.False(result["provisional"]!.GetValue<bool>());
+        Assert.Equal("action", result["band"]!.GetValue<string>());
+        Assert.DoesNotContain(result["findings"]!.AsArray(), f => f!["analyte"]!.GetValue<string>() == "copper");
+    }
+}

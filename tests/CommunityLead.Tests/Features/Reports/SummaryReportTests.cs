@@ -153,3 +153,17 @@ public class SummaryReportTests
         // OWASP "CSV Injection": prefix cells starting with = + - @ so spreadsheets treat them as text (common practice).
         Assert.Equal(written, CommunityLead.Api.Features.Reports.SummaryCsv.Escape(cell));
 }
+
+public class SummaryPeriodTests
+{
+    [Theory]
+    [InlineData("from=2026-04-02", "from")]
+    [InlineData("to=2026-04-29", "to")]
+    public async Task Summary_PeriodNotOnWholeMonths_400SoDifferencesCannotRevealSmallCounts(string query, string field)
+    {
+        using var app = new CommunityLeadFactory();
+        var response = await app.CreateClient(CommunityLead.Api.Auth.Roles.Health).GetAsync($"/api/reports/summary?groupBy=area&{query}");
+        Assert.Equal(HttpStatusCode.BadRequest, response.StatusCode);
+        Assert.Contains(field, await response.Content.ReadAsStringAsync());
+    }
+}

@@ -144,9 +144,12 @@ public class InterpreterBoundaryTests
     public void ReportingLimit_NotBelowTheLevel_SaysWeCannotTell()
     {
         // A lab that measures down to 2 µg/L can't show water is under the 1 ppb school level (AAP 2016).
+        // It must not read as "not detected": the household is told the test could not tell, in the caution band.
         var coarse = Interpret(Water(NotDetected(BottleType.FirstDraw, reportingLimit: 2)), Levels.Schools);
-        Assert.Equal(Band.NotDetected, coarse.Band);
+        Assert.Equal(Band.Advisory, coarse.Band);
         Assert.Contains("result.reporting-limit-at-level", Codes(coarse));
+        Assert.Contains("summary.water.cannot-tell", Codes(coarse));
+        Assert.DoesNotContain("summary.water.not-detected", Codes(coarse));
         var fine = Interpret(Water(NotDetected(BottleType.FirstDraw, reportingLimit: 0.5)), Levels.Schools);
         Assert.DoesNotContain("result.reporting-limit-at-level", Codes(fine));
     }

@@ -65,8 +65,8 @@ internal static class InterpreterCases
         ["copper action"] = new(Water(First(2), Copper(1.3)), Band.Action, null, [ActionLevel], ["copper.health", "result.action"], ["step.use-filtered"]),
         ["copper, profile without copper levels"] = new(Water(First(2), Copper(1.6)), Band.Low, null, [], ["result.measured"],
             Profile: Levels.HealthCanada),
-        ["school, lab can't see 1 ppb"] = new(Water(NotDetected(BottleType.FirstDraw, reportingLimit: 2)), Band.NotDetected, null, [],
-            ["result.not-detected", "result.reporting-limit-at-level"], Profile: Levels.Schools),
+        ["school, lab can't see 1 ppb"] = new(Water(NotDetected(BottleType.FirstDraw, reportingLimit: 2)), Band.Advisory, null, [],
+            ["result.not-detected", "result.reporting-limit-at-level", "summary.water.cannot-tell"], Profile: Levels.Schools),
         ["copper low"] = new(Water(First(2), Copper(0.4)), Band.Low, null, [], ["result.low"], ["copper.taste", "copper.health"]),
         ["copper action, child"] = new(Water(Home(child: true), NotDetected(BottleType.FirstDraw), Copper(1.5)), Band.Action, null,
             [ActionLevelVulnerableHome], ["copper.health", "care.blood-test"], ["care.vulnerable-water"]),
@@ -151,7 +151,7 @@ internal static class InterpreterCases
         ["soil, QC held"] = new(SoilKit(Home(), Soil(PlayArea, 300)).With(ValidityIssueCode.QcHeld), Band.Retest, null, [RetestNeeded],
             ["step.retest-soil", "retest.qc-held"], ["soil.below"], Profile: Levels.SoilHazard),
         ["soil, place not recorded"] = new(SoilKit(Home(), Soil(null, 420)), Band.Action, null, [ActionLevel], ["soil.above"], Profile: Levels.SoilHazard),
-        ["soil, limit above screening"] = new(SoilKit(Home(built: 1950), SoilNotDetected(Yard, reportingLimit: 120)), Band.NotDetected, null, [],
+        ["soil, limit above screening"] = new(SoilKit(Home(built: 1950), SoilNotDetected(Yard, reportingLimit: 120)), Band.Advisory, null, [],
             ["soil.reporting-limit-at-level"], Profile: Levels.SoilScreening),
     };
 

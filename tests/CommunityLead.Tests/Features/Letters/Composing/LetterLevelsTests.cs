@@ -44,13 +44,14 @@ public class LetterLevelsTests
     }
 
     [Fact]
-    public void Compose_WithoutLevels_CallsAnUnknownLowestLevelSoInsteadOfGuessing()
+    public void Compose_WithoutLevels_NamesTheCautionLevelABlindResultWasJudgedAgainst()
     {
         var letter = LetterComposer.Compose(School.Interpretation, Profiles.Schools.Name, Ana, LetterLanguage.En, LetterKind.Results,
             Code, Collected, LetterDate, false, false, Settings);
 
-        Assert.Equal("Lowest level we use 1 µg/L", letter.Results!.Rows[0][3]);
-        Assert.Equal([new ScaleMark(1, "Lowest level we use")], letter.Scales[0].Levels);
+        // "< 2 µg/L" cannot show water is under the 1 ppb school level (AAP 2016): judged in the caution band against it.
+        Assert.Equal("Caution level 1 µg/L", letter.Results!.Rows[0][3]);
+        Assert.Equal([new ScaleMark(1, "Caution level")], letter.Scales[0].Levels);
     }
 
     [Fact]
