@@ -74,6 +74,7 @@ public static class DemoLoader
             newHouseholds++;
         }
         await db.SaveChangesAsync();
+        if (!await DemoResults.LoadAsync(scope.ServiceProvider, scenario.LettersSent ?? [], error)) return null;
         return new DemoLoadResult(newHouseholds, newKits, scenario.Households.Count - newHouseholds);
     }
 

@@ -5,7 +5,8 @@ using CommunityLead.Rules.Kits;
 namespace CommunityLead.Api.Demo;
 
 /// <summary>The shape of seed-data/demo.json: an invented program, its households and their kits.</summary>
-public sealed record DemoScenario(DemoProgram Program, IReadOnlyList<DemoHousehold> Households);
+/// <param name="LettersSent">Kits whose letter is issued and confirmed sent once their results are interpreted.</param>
+public sealed record DemoScenario(DemoProgram Program, IReadOnlyList<DemoHousehold> Households, IReadOnlyList<string>? LettersSent = null);
 
 public sealed record DemoProgram(string Name, string Town, string Note);
 

@@ -55,6 +55,17 @@ public static class BatchIntake
             throw new BadHttpRequestException("The batch is not valid JSON.", StatusCodes.Status400BadRequest, e);
         }
 
+        return await IngestAsync(parsed, db, options, jsonOptions, clock, interpreting, Actor.From(http.User), ct);
+    }
+
+    /// <summary>
+    /// Everything after reading: checks, idempotency, QC, one transaction, effects, interpretation. Also used by the
+    /// demo loader, so demo batches take exactly the path a lab's do.
+    /// </summary>
+    public static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> IngestAsync(ParsedBatch parsed,
+        CommunityLeadDb db, LabIntakeOptions options, JsonSerializerOptions jsonOptions, TimeProvider clock,
+        InterpretAfterResults interpreting, Actor actor, CancellationToken ct)
+    {
         // A repeat is recognised before the checks: a retry must get the original outcome even when its kits
         // have moved on since (closed, say), which the checks would now refuse.
         var hash = ContentHash(parsed.Request, jsonOptions);
@@ -70,7 +81,6 @@ public static class BatchIntake
             return BatchProblems.Unprocessable([new("", "correction", $"There is no batch {batch.BatchId} to correct.")]);
 
         var now = clock.GetUtcNow().UtcDateTime;
-        var actor = Actor.From(http.User);
         var entity = BatchRecords.NewBatch(batch, (latest?.Version ?? 0) + 1, hash, parsed.Format, options.Qc, actor, now, jsonOptions);
         db.LabBatches.Add(entity);
         db.AuditTrail.Add(Audit.Batch(actor, now, entity.BatchId, batch.Correction ? "post-correction" : "post",

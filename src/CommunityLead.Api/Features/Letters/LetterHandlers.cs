@@ -57,8 +57,16 @@ public static class LetterHandlers
         if (letter.SentAtUtc is not null)
             return TypedResults.Problem(statusCode: 409, title: "This letter was already confirmed as sent.",
                 detail: $"Letter {letter.Id} was confirmed on {letter.SentAtUtc:yyyy-MM-dd} by {letter.SentBy}.");
-        var now = clock.GetUtcNow().UtcDateTime;
-        var actor = Actor.From(http.User);
+        if (await ConfirmAsync(db, kit, letter, Actor.From(http.User), clock.GetUtcNow().UtcDateTime, ct) is { } illegal)
+            return illegal;
+        if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
+        return TypedResults.Ok(Listing(letter));
+    }
+
+    /// <summary>Marks one issued letter sent: the kit moves to letter-sent, the wait is recorded, a corrected-result item closes.</summary>
+    internal static async Task<ProblemHttpResult?> ConfirmAsync(CommunityLeadDb db, Kit kit, IssuedLetter letter, Actor actor, DateTime now,
+        CancellationToken ct)
+    {
         if (KitTransitions.Apply(db, kit, KitAction.SendLetter, actor, now,
                 detail: $"letter {letter.Id} ({KebabEnum.Name(letter.Kind)}, {KebabEnum.Name(letter.Language)}), sha256 {letter.Sha256[..12]}") is { } illegal)
             return illegal;
@@ -67,8 +75,7 @@ public static class LetterHandlers
         letter.DaysFromCollection = DateOnly.FromDateTime(now).DayNumber - letter.CollectedOn.DayNumber;
         await db.Attention.Where(a => a.KitId == kit.Id && a.ResolvedAtUtc == null && a.Reason == AttentionFlag.CorrectedAfterLetter)
             .ForEachAsync(a => { a.ResolvedAtUtc = now; a.ResolvedBy = actor.Label; a.ResolutionNote = $"Corrected letter {letter.Id} sent."; }, ct);
-        if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
-        return TypedResults.Ok(Listing(letter));
+        return null;
     }
 
     public static async Task<Results<Ok<List<LetterListing>>, ValidationProblem, ProblemHttpResult>> List(

@@ -1,0 +1,64 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Features.Interpretation;
+using CommunityLead.Api.Features.LabResults;
+using CommunityLead.Api.Features.Letters;
+using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Kits;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.AspNetCore.Http.Json;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Options;
+
+namespace CommunityLead.Api.Demo;
+
+/// <summary>
+/// The demo's lab batches (seed-data/demo-batches, in file order) go through the same intake as a lab's post,
+/// so QC, holds, the correction and interpretation happen for real; then some letters are issued and confirmed.
+/// Posting a batch again is recognised as a repeat, so loading twice adds nothing.
+/// </summary>
+public static class DemoResults
+{
+    private static readonly Actor Lab = new("demo-lab", Roles.Lab);
+    private static readonly Actor Coordinator = new("demo-loader", Roles.Coordinator);
+
+    public static async Task<bool> LoadAsync(IServiceProvider services, IReadOnlyList<string> lettersSent, TextWriter error)
+    {
+        var db = services.GetRequiredService<CommunityLeadDb>();
+        var json = services.GetRequiredService<IOptions<JsonOptions>>().Value.SerializerOptions;
+        var clock = services.GetRequiredService<TimeProvider>();
+        var options = services.GetRequiredService<IOptions<LabIntakeOptions>>().Value;
+        var interpreting = services.GetRequiredService<InterpretAfterResults>();
+        var folder = SeedData.Find("demo-batches");
+        var files = folder is null ? [] : Directory.GetFiles(folder, "*.json").Order(StringComparer.Ordinal).ToArray();
+        var versions = new Dictionary<string, int>();
+        foreach (var file in files)
+        {
+            ParsedBatch parsed;
+            await using (var stream = File.OpenRead(file))
+                parsed = await JsonBatchReader.ReadAsync(stream, json, CancellationToken.None);
+            db.ChangeTracker.Clear();
+            // A file is a batch's next version; once that version exists, the file was loaded before.
+            var batchId = parsed.Request.BatchId ?? "";
+            var version = versions[batchId] = versions.GetValueOrDefault(batchId) + 1;
+            if (await db.LabBatches.AnyAsync(b => b.BatchId == batchId && b.Version >= version)) continue;
+            var outcome = await BatchIntake.IngestAsync(parsed, db, options, json, clock, interpreting, Lab, CancellationToken.None);
+            if (outcome.Result is ProblemHttpResult problem)
+            {
+                error.WriteLine($"{file}: {problem.ProblemDetails.Title} {problem.ProblemDetails.Detail}");
+                return false;
+            }
+        }
+
+        db.ChangeTracker.Clear();
+        var ready = await db.Kits.Where(k => lettersSent.Contains(k.Code) && k.State == KitState.Interpreted).ToListAsync();
+        if (ready.Count == 0) return true;
+        var issuing = services.GetRequiredService<LetterIssuing>();
+        var letters = await issuing.IssueAsync([.. ready.Select(k => k.Id)], null, Coordinator, CancellationToken.None);
+        var now = clock.GetUtcNow().UtcDateTime;
+        foreach (var letter in letters)
+            await LetterHandlers.ConfirmAsync(db, ready.Single(k => k.Id == letter.Record.KitId), letter.Record, Coordinator, now, CancellationToken.None);
+        await db.SaveChangesAsync();
+        return true;
+    }
+}
