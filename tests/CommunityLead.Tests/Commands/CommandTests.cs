@@ -63,12 +63,21 @@ public class CommandTests
         // The scenario shows kits in several states and at least one flagged collection.
         Assert.True(app.WithDb(db => db.Kits.Select(k => k.State).Distinct().Count()) >= 5);
         Assert.True(app.WithDb(db => db.KitFlags.Any()));
+        // The lab batches went through the real intake: one held, then corrected; kits interpreted; letters sent.
+        Assert.Equal(4, app.WithDb(db => db.LabBatches.Count()));
+        Assert.Equal(1, app.WithDb(db => db.LabBatches.Count(b => b.Status == CommunityLead.Api.Data.Entities.BatchStatus.Held)));
+        Assert.True(app.WithDb(db => db.Interpretations.Count()) >= 100);
+        Assert.True(app.WithDb(db => db.Letters.Count(l => l.SentAtUtc != null)) >= 20);
+        Assert.True(app.WithDb(db => db.Attention.Any(a => a.Reason == CommunityLead.Rules.Interpretation.AttentionFlag.Urgent)));
+        var letters = app.WithDb(db => db.Letters.Count());
 
         var second = await RunAsync(app, "demo");
         Assert.Equal(0, second.Exit);
         Assert.Equal(households, app.WithDb(db => db.Households.Count()));
         Assert.Equal(kits, app.WithDb(db => db.Kits.Count()));
         Assert.Equal(audit, app.WithDb(db => db.AuditTrail.Count()));
+        Assert.Equal(letters, app.WithDb(db => db.Letters.Count()));
+        Assert.Equal(4, app.WithDb(db => db.LabBatches.Count()));
     }
 
     [Fact]
