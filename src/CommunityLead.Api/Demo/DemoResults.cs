@@ -55,9 +55,13 @@ public static class DemoResults
         if (ready.Count == 0) return true;
         var issuing = services.GetRequiredService<LetterIssuing>();
         var letters = await issuing.IssueAsync([.. ready.Select(k => k.Id)], null, Coordinator, CancellationToken.None);
-        var now = clock.GetUtcNow().UtcDateTime;
         foreach (var letter in letters)
-            await LetterHandlers.ConfirmAsync(db, ready.Single(k => k.Id == letter.Record.KitId), letter.Record, Coordinator, now, CancellationToken.None);
+        {
+            // Sent a few days after collection, as a program would, so the collection-to-letter figures look real.
+            var kit = ready.Single(k => k.Id == letter.Record.KitId);
+            var sentAt = (kit.CollectedAtUtc ?? clock.GetUtcNow().UtcDateTime).AddDays(3 + kit.Id % 6);
+            await LetterHandlers.ConfirmAsync(db, kit, letter.Record, Coordinator, sentAt, CancellationToken.None);
+        }
         await db.SaveChangesAsync();
         return true;
     }
