@@ -21,7 +21,13 @@ public static class CsvBatchReader
         var header = ReadQuery(query, problems);
         var results = new List<ResultRow>();
         var qc = new List<QcRow>();
-        await using var csv = CsvReader.Create(body, new CsvReaderOptions { TrackLineNumbers = true }, leaveOpen: true);
+        await using var csv = CsvReader.Create(body, new CsvReaderOptions
+        {
+            TrackLineNumbers = true,
+            // Lab exports never need line breaks inside a cell; refusing them means one stray quote spoils one
+            // row (reported with its line) instead of silently swallowing the rest of the file.
+            AllowLineBreaksInQuotes = false,
+        }, leaveOpen: true);
         await csv.ReadHeaderAsync(ct);
         if (csv.Headers.Count == 0)
         {

@@ -74,3 +74,22 @@ public class CsvRefusalTests
         Assert.Equal(0, app.WithDb(db => db.LabBatches.Count()));
     }
 }
+
+public class CsvStrayQuoteTests
+{
+    [Fact]
+    public async Task Csv_StrayQuote_OnlyItsRowIsWrongAndLaterRowsAreStillChecked()
+    {
+        using var app = new CommunityLead.Tests.Infrastructure.CommunityLeadFactory();
+        var flow = new CommunityLead.Tests.Features.Interpretation.ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        var csv = "kitCode,bottle,analyte,value,unit,mdl,reportingLimit\n" +
+                  $"\"{code},first-draw,lead,2.5,ug/L,0.3,1.0\n" +
+                  $"{code},flushed,lead,abc,ug/L,0.3,1.0\n";
+        using var content = new System.Net.Http.StringContent(csv, System.Text.Encoding.UTF8, "text/csv");
+        var response = await flow.Lab.PostAsync("/api/lab/batches?batchId=Q-1&method=EPA%20200.8&analyzedAt=2026-04-05T10:00:00Z", content);
+        Assert.Equal(System.Net.HttpStatusCode.UnprocessableEntity, response.StatusCode);
+        var body = await response.Content.ReadAsStringAsync();
+        Assert.Contains("row 3/value", body);   // the row after the stray quote is still read and checked
+    }
+}
