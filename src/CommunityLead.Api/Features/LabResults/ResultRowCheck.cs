@@ -53,6 +53,8 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (row.AcidifiedAt is not null && acidifiedAt is null) Problem("acidifiedAt", OffsetRequiredConverter.Message);
         if (acidifiedAt is { } acidified && sample is not null && acidified < sample.CollectedAt)
             Problem("acidifiedAt", "The sample cannot be acidified before it was collected.");
+        if (acidifiedAt is { } preserved && analyzedAt is { } run && preserved > run)
+            Problem("acidifiedAt", "The sample cannot be acidified after the batch was analyzed.");
         if (analyzedAt is { } analyzed && sample is not null && analyzed < sample.CollectedAt)
             Problem("analyzedAt", $"The batch's analysis time is before kit {kit.Code}'s sample was collected.");
         // Without a valid analysis time (reported once, for the batch) holding times cannot be judged.

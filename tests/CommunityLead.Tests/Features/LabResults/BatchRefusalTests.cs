@@ -25,6 +25,7 @@ public class BatchRefusalTests
     [InlineData("'<' not at the limit", "/results/0/value", "must be the reporting limit")]
     [InlineData("analysis time without offset", "analyzedAt", "UTC offset")]
     [InlineData("acid time without offset", "/results/0/acidifiedAt", "UTC offset")]
+    [InlineData("acidified after analysis", "/results/0/acidifiedAt", "after the batch was analyzed")]
     [InlineData("unknown QC type", "/qc/0/type", "calibration-check")]
     public async Task JsonBatch_OneBadRow_422NamingItAndNothingWritten(string problem, string key, string reason)
     {
@@ -54,6 +55,7 @@ public class BatchRefusalTests
             case "'<' not at the limit": (first["qualifier"], first["value"]) = ("<", 0.5); break;
             case "analysis time without offset": batch["analyzedAt"] = "2026-04-08T14:30:00"; break;
             case "acid time without offset": first["acidifiedAt"] = "2026-04-03T09:00:00"; break;
+            case "acidified after analysis": first["acidifiedAt"] = "2026-04-09T09:00:00+00:00"; break;
             case "unknown QC type": batch["qc"]![0]!["type"] = "spike"; break;
         }
         var before = FootprintOf(app);
