@@ -26,10 +26,15 @@ public static class BatchEffects
         Actor actor, DateTime nowUtc, CancellationToken ct)
     {
         var kitIds = results.Select(r => r.KitId).Distinct().ToList();
-        var earlier = await db.LabResults
+        var earlier = await db.LabResults.Include(r => r.Batch)
             .Where(r => kitIds.Contains(r.KitId) && r.SupersededAtUtc == null && r.LabBatchId != batch.Id
                         && (r.Batch!.Status == BatchStatus.Accepted || r.Batch.Status == BatchStatus.Released))
             .ToListAsync(ct);
+        // A held batch released late must not override what the lab posted after it: for those bottles its own
+        // results yield (kept, superseded) and the newer ones stay current.
+        var newer = earlier.Where(r => r.Batch!.PostedAtUtc > batch.PostedAtUtc).Select(Key).ToHashSet();
+        foreach (var late in results.Where(r => newer.Contains(Key(r)))) late.SupersededAtUtc = nowUtc;
+        results = [.. results.Where(r => r.SupersededAtUtc is null)];
         var incoming = results.Select(Key).ToHashSet();
         var replaced = earlier.Where(r => incoming.Contains(Key(r))).ToLookup(Key);
         foreach (var old in replaced.SelectMany(g => g))
@@ -48,6 +53,7 @@ public static class BatchEffects
             .ToLookup(s => s.KitId, s => (s.Bottle, s.Position, s.Location));
         var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);
         var resultsPerKit = results.CountBy(r => r.KitId).ToDictionary();
+        kits = [.. kits.Where(k => resultsPerKit.ContainsKey(k.Id))];
         var analyzed = new List<int>();
         foreach (var kit in kits)
         {

@@ -21,7 +21,7 @@ public class LabPrivacyTests
         var lab = app.CreateClient(Roles.Lab);
         var kit = await ReceivedKitAsync(coordinator, lab);
         var householdId = (await GetAsync(coordinator, $"/api/kits/{kit}"))["householdId"]!.GetValue<string>();
-        var batch = Batch("PRIV-1", BothBottles(kit));
+        var batch = Batch("PRIV-1", BothBottles(kit), analyzedAt: "2026-04-20T10:00:00+00:00");
         batch["results"]![0]!["acidifiedAt"] = "2026-04-18T07:00:00+00:00";
         app.Clock.Now = new DateTimeOffset(2026, 4, 25, 12, 0, 0, TimeSpan.Zero);
 

@@ -107,3 +107,24 @@ public class ReleaseTests
         return (coordinator, lab, kit);
     }
 }
+
+public class LateReleaseTests
+{
+    [Fact]
+    public async Task Release_OlderHeldBatchAfterANewerOne_NewerResultsStayCurrent()
+    {
+        using var app = new CommunityLead.Tests.Infrastructure.CommunityLeadFactory();
+        var flow = new CommunityLead.Tests.Features.Interpretation.ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        var held = await flow.PostLeadAsync(code, firstDraw: 30, flushed: 20, calibration: 7.5);   // 75 %: held
+        app.Clock.Now = app.Clock.Now.AddHours(2);
+        await flow.PostLeadAsync(code, firstDraw: 4, flushed: 1.5);                                  // re-run, accepted
+        app.Clock.Now = app.Clock.Now.AddHours(2);
+        await CommunityLead.Tests.Infrastructure.Fixtures.PostAsync(flow.Coordinator,
+            $"/api/lab/batches/{held["batchId"]}/release", new { reason = "lab says the check was mislabelled" }, System.Net.HttpStatusCode.OK);
+
+        var current = app.WithDb(db => db.LabResults.Where(r => r.KitCode == code && r.SupersededAtUtc == null)
+            .Select(r => r.Value).OrderBy(v => v).ToList());
+        Assert.Equal([1.5, 4.0], current);
+    }
+}
