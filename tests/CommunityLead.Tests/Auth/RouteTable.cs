@@ -19,6 +19,7 @@ public static class RouteTable
     {
         ["GET /health"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health")),
 
+        ["GET /api/households/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/households?search=Quennell")),
         ["POST /api/households/"] = Coordinator(HttpStatusCode.Created, _ => Send(HttpMethod.Post, "/api/households", Household())),
         ["GET /api/households/{id:guid}"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/households/{await s.HouseholdAsync()}")),

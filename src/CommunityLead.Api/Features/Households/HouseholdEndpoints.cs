@@ -9,6 +9,7 @@ namespace CommunityLead.Api.Features.Households;
 
 public static class HouseholdEndpoints
 {
+    // GET  /api/households?search=  find homes by name, phone, email, street or postal code
     // POST /api/households        sign a household up
     // GET  /api/households/{id}   read it, with its kits
     // PUT  /api/households/{id}   replace its details
@@ -18,6 +19,7 @@ public static class HouseholdEndpoints
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
             .ProducesProblem(StatusCodes.Status404NotFound);
+        group.MapGet("/", HouseholdSearch.Search);
         group.MapPost("/", SignUp);
         group.MapGet("/{id:guid}", Get);
         group.MapPut("/{id:guid}", Update);

@@ -1,0 +1,37 @@
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Infrastructure;
+using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Features.Households;
+
+public sealed record HouseholdSummary(Guid Id, string Name, string AddressLine1, string City, string PostalCode, string AreaCode, int Kits);
+
+public sealed record HouseholdPage(IReadOnlyList<HouseholdSummary> Items, int Page, int PageSize, int Total);
+
+/// <summary>Finding a home when it calls: by part of its name, phone, email, street or postal code.</summary>
+public static class HouseholdSearch
+{
+    public static async Task<Results<Ok<HouseholdPage>, ValidationProblem>> Search(
+        CommunityLeadDb db, CancellationToken ct, string? search = null, string? areaCode = null, int page = 1, int pageSize = 25)
+    {
+        if (search is { Length: > 100 }) return Problems.Field("search", "Search for at most 100 characters.");
+        if (page < 1) return Problems.Field("page", "Pages are numbered from 1.");
+        if (pageSize is < 1 or > 100) return Problems.Field("pageSize", "Use a page size from 1 to 100.");
+        var query = db.Households.AsNoTracking();
+        if (!string.IsNullOrWhiteSpace(areaCode)) query = query.Where(h => h.AreaCode == areaCode.Trim().ToLowerInvariant());
+        if (!string.IsNullOrWhiteSpace(search))
+        {
+            // The person's text is matched literally: % and _ mean themselves, not LIKE wildcards.
+            var pattern = "%" + search.Trim().Replace("\\", "\\\\").Replace("%", "\\%").Replace("_", "\\_") + "%";
+            query = query.Where(h => EF.Functions.Like(h.Name, pattern, "\\") || EF.Functions.Like(h.Phone!, pattern, "\\")
+                || EF.Functions.Like(h.Email!, pattern, "\\") || EF.Functions.Like(h.Address.Line1, pattern, "\\")
+                || EF.Functions.Like(h.Address.PostalCode, pattern, "\\"));
+        }
+        var total = await query.CountAsync(ct);
+        var items = await query.OrderBy(h => h.Name).ThenBy(h => h.Id).Skip((page - 1) * pageSize).Take(pageSize)
+            .Select(h => new HouseholdSummary(h.Id, h.Name, h.Address.Line1, h.Address.City, h.Address.PostalCode, h.AreaCode, h.Kits.Count))
+            .ToListAsync(ct);
+        return TypedResults.Ok(new HouseholdPage(items, page, pageSize, total));
+    }
+}

@@ -1,0 +1,29 @@
+using System.Net;
+using CommunityLead.Api.Auth;
+using CommunityLead.Tests.Infrastructure;
+using static CommunityLead.Tests.Infrastructure.Fixtures;
+
+namespace CommunityLead.Tests.Features.Households;
+
+public class HouseholdSearchTests
+{
+    [Fact]
+    public async Task Search_ByPartOfNamePhoneOrStreet_FindsOnlyMatchingHomes()
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var marisol = await SignUpAsync(coordinator);
+        await SignUpAsync(coordinator, h => { h["name"] = "Tobias Wren"; h["phone"] = "+1 555 0999"; h["address"]!["line1"] = "3 Gull Street"; });
+        await IssueKitAsync(coordinator, marisol);
+
+        var byName = await GetAsync(coordinator, "/api/households?search=quenn");
+        Assert.Equal(1, byName["total"]!.GetValue<int>());
+        Assert.Equal(marisol, byName["items"]![0]!["id"]!.GetValue<string>());
+        Assert.Equal(1, byName["items"]![0]!["kits"]!.GetValue<int>());
+        Assert.Equal("Tobias Wren", (await GetAsync(coordinator, "/api/households?search=0999"))["items"]![0]!["name"]!.GetValue<string>());
+        Assert.Equal("Tobias Wren", (await GetAsync(coordinator, "/api/households?search=gull"))["items"]![0]!["name"]!.GetValue<string>());
+        Assert.Equal(0, (await GetAsync(coordinator, "/api/households?search=%25"))["total"]!.GetValue<int>()); // "%" is literal
+        Assert.Equal(2, (await GetAsync(coordinator, "/api/households"))["total"]!.GetValue<int>());
+        await GetAsync(coordinator, "/api/households?pageSize=500", HttpStatusCode.BadRequest);
+    }
+}
