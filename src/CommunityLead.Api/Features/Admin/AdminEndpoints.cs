@@ -35,7 +35,7 @@ public static class AdminEndpoints
     public static async Task<Results<Ok<AuditPage>, ValidationProblem>> ReadAudit(
         CommunityLeadDb db, CancellationToken ct, string? subject = null, long after = 0, int pageSize = 100)
     {
-        if (pageSize is < 1 or > 500) return Problems.Field("pageSize", "Use a page size from 1 to 500.");
+        if (Paging.Check(page: 1, pageSize, largest: 500) is { } badPage) return badPage;
         var query = db.AuditTrail.AsNoTracking().Where(a => a.Id > after);
         if (subject is not null) query = query.Where(a => a.Subject == subject);
         var items = await query.OrderBy(a => a.Id).Take(pageSize)

@@ -16,8 +16,7 @@ public static class HouseholdSearch
         CommunityLeadDb db, CancellationToken ct, string? search = null, string? areaCode = null, int page = 1, int pageSize = 25)
     {
         if (search is { Length: > 100 }) return Problems.Field("search", "Search for at most 100 characters.");
-        if (page < 1) return Problems.Field("page", "Pages are numbered from 1.");
-        if (pageSize is < 1 or > 100) return Problems.Field("pageSize", "Use a page size from 1 to 100.");
+        if (Paging.Check(page, pageSize, largest: 100) is { } badPage) return badPage;
         var query = db.Households.AsNoTracking();
         if (!string.IsNullOrWhiteSpace(areaCode)) query = query.Where(h => h.AreaCode == areaCode.Trim().ToLowerInvariant());
         if (!string.IsNullOrWhiteSpace(search))

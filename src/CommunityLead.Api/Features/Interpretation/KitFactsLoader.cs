@@ -28,8 +28,7 @@ public static class KitFactsLoader
             })
             .ToListAsync(ct);
         var current = db.Collections.Where(c => kitIds.Contains(c.KitId) && c.SupersededAtUtc == null);
-        var samples = (await db.Samples.AsNoTracking().Join(current, s => s.CollectionId, c => c.Id, (s, c) => new { c.KitId, Sample = s })
-            .ToListAsync(ct)).ToLookup(x => x.KitId, x => x.Sample);
+        var samples = (await db.CurrentSamples(kitIds).ToListAsync(ct)).ToLookup(x => x.KitId, x => x.Sample);
         var invalidating = (await db.KitFlags.AsNoTracking()
                 .Where(f => f.Severity == FlagSeverity.InvalidatesSample)
                 .Join(current, f => f.CollectionId, c => c.Id, (f, c) => new { c.KitId, f.Code, f.Message })

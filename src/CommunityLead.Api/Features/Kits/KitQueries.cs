@@ -31,8 +31,7 @@ public static class KitQueries
             query = query.Where(k => k.State == wanted);
         }
         if (householdId is not null) query = query.Where(k => k.HouseholdId == householdId);
-        if (page < 1) return Problems.Field("page", "Pages are numbered from 1.");
-        if (pageSize is < 1 or > 200) return Problems.Field("pageSize", "Use a page size from 1 to 200.");
+        if (Paging.Check(page, pageSize, largest: 200) is { } badPage) return badPage;
 
         var total = await query.CountAsync(ct);
         var items = await query.OrderBy(k => k.UpdatedAtUtc).ThenBy(k => k.Id)

@@ -28,9 +28,8 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         var kits = await db.Kits.AsNoTracking().Where(k => wanted.Contains(k.Code))
             .Select(k => new BatchKit(k.Id, k.Code, k.Kind, k.State)).ToDictionaryAsync(k => k.Code, ct);
         var kitIds = kits.Values.Select(k => k.Id).ToList();
-        var samples = (await db.Samples.AsNoTracking()
-                .Join(db.Collections.Where(c => kitIds.Contains(c.KitId) && c.SupersededAtUtc == null),
-                    s => s.CollectionId, c => c.Id, (s, c) => new SampleFacts(c.KitId, s.Bottle, s.Position, s.Location, s.CollectedAt))
+        var samples = (await db.CurrentSamples(kitIds)
+                .Select(x => new SampleFacts(x.KitId, x.Sample.Bottle, x.Sample.Position, x.Sample.Location, x.Sample.CollectedAt))
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId);
 

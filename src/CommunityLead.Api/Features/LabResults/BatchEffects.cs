@@ -46,9 +46,8 @@ public static class BatchEffects
         var covered = earlier.Where(r => r.SupersededAtUtc is null).Concat(results)
             .Where(r => r.Analyte == Analyte.Lead)
             .ToLookup(r => r.KitId, r => (r.Bottle, r.Position, r.Location));
-        var bottles = (await db.Samples.AsNoTracking()
-                .Join(db.Collections.Where(c => kitIds.Contains(c.KitId) && c.SupersededAtUtc == null),
-                    s => s.CollectionId, c => c.Id, (s, c) => new { c.KitId, s.Bottle, s.Position, s.Location })
+        var bottles = (await db.CurrentSamples(kitIds)
+                .Select(x => new { x.KitId, x.Sample.Bottle, x.Sample.Position, x.Sample.Location })
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId, s => (s.Bottle, s.Position, s.Location));
         var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);

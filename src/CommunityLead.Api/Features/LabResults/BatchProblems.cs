@@ -24,6 +24,9 @@ public static class BatchProblems
         });
     }
 
+    public static ProblemHttpResult NotFound(string batchId) =>
+        TypedResults.Problem(statusCode: StatusCodes.Status404NotFound, title: "No such batch.", detail: $"No batch {batchId} was posted.");
+
     public static ProblemHttpResult TooLarge(long limit) =>
         TypedResults.Problem(statusCode: StatusCodes.Status413PayloadTooLarge, title: "The batch is too large.",
             detail: $"Batches may be up to {limit:N0} bytes (setting LabIntake:MaxBatchBytes). Split it into several batches.");

@@ -17,7 +17,7 @@ public static class BatchQueries
     {
         var versions = await db.LabBatches.AsNoTracking().Where(b => b.BatchId == batchId).OrderBy(b => b.Version).ToListAsync(ct);
         if (versions.Count == 0)
-            return TypedResults.Problem(statusCode: 404, title: "No such batch.", detail: $"No batch {batchId} was posted.");
+            return BatchProblems.NotFound(batchId);
         var latest = versions[^1];
         var options = json.Value.SerializerOptions;
         var results = await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == latest.Id).OrderBy(r => r.Id).ToListAsync(ct);
@@ -42,8 +42,7 @@ public static class BatchQueries
                 return Problems.Field("status", $"Use one of: {KebabEnum.Allowed<BatchStatus>()}.");
             query = query.Where(b => b.Status == wanted);
         }
-        if (page < 1) return Problems.Field("page", "Pages are numbered from 1.");
-        if (pageSize is < 1 or > 200) return Problems.Field("pageSize", "Use a page size from 1 to 200.");
+        if (Paging.Check(page, pageSize, largest: 200) is { } badPage) return badPage;
         var total = await query.CountAsync(ct);
         var items = await query.OrderByDescending(b => b.PostedAtUtc).ThenByDescending(b => b.Id)
             .Skip((page - 1) * pageSize).Take(pageSize)

@@ -24,7 +24,7 @@ public static class BatchReleasing
     {
         var batch = await db.LabBatches.Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct);
         if (batch is null)
-            return TypedResults.Problem(statusCode: 404, title: "No such batch.", detail: $"No batch {batchId} was posted.");
+            return BatchProblems.NotFound(batchId);
         if (batch.Status != BatchStatus.Held)
             return TypedResults.Problem(statusCode: 409, title: "Only a held batch can be released.",
                 detail: $"Batch {batchId} version {batch.Version} is {KebabEnum.Name(batch.Status)}.",

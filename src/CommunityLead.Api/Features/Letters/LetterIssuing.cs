@@ -32,9 +32,8 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
             .Select(k => new { k.Id, k.Code, k.Household }).ToListAsync(ct);
         var interpretations = await db.Interpretations.AsNoTracking()
             .Where(i => kitIds.Contains(i.KitId) && i.SupersededAtUtc == null).ToDictionaryAsync(i => i.KitId, ct);
-        var collectedOn = (await db.Samples.AsNoTracking()
-                .Join(db.Collections.Where(c => kitIds.Contains(c.KitId) && c.SupersededAtUtc == null),
-                    s => s.CollectionId, c => c.Id, (s, c) => new { c.KitId, s.CollectedAt, s.CollectedAtUtc })
+        var collectedOn = (await db.CurrentSamples(kitIds)
+                .Select(x => new { x.KitId, x.Sample.CollectedAt, x.Sample.CollectedAtUtc })
                 .ToListAsync(ct))
             .GroupBy(x => x.KitId).ToDictionary(g => g.Key, g => DateOnly.FromDateTime(g.MinBy(x => x.CollectedAtUtc)!.CollectedAt.DateTime));
         var sentBefore = (await db.Letters.AsNoTracking().Where(l => kitIds.Contains(l.KitId) && l.SentAtUtc != null)
