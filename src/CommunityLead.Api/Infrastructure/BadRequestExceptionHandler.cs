@@ -20,7 +20,10 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
         var problem = new HttpValidationProblemDetails { Status = bad.StatusCode };
         if (bad.InnerException is JsonException json)
         {
-            problem.Title = "The request body is not valid JSON for this request.";
+            // Well-formed JSON with a value of the wrong form is a field problem, not broken JSON.
+            problem.Title = json.Message.Contains("could not be converted", StringComparison.Ordinal) || json.Message.StartsWith("Times need", StringComparison.Ordinal)
+                ? "The request has invalid fields."
+                : "The request body is not valid JSON for this request.";
             problem.Errors[FieldPath.FromJsonPath(json.Path)] = [Explain(json, FieldType(context, json.Path))];
         }
         else if (NoBody().IsMatch(bad.Message))
@@ -62,9 +65,17 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
         var enumType = fieldType is { IsEnum: true }
             ? fieldType
             : ContractEnums.FirstOrDefault(t => message.Contains(t.FullName!, StringComparison.Ordinal));
-        return enumType is null
-            ? "This value has the wrong type."
-            : $"Use one of: {string.Join(", ", Enum.GetNames(enumType).Select(JsonNamingPolicy.KebabCaseLower.ConvertName))}.";
+        if (enumType is not null)
+            return $"Use one of: {string.Join(", ", Enum.GetNames(enumType).Select(JsonNamingPolicy.KebabCaseLower.ConvertName))}.";
+        return (Nullable.GetUnderlyingType(fieldType ?? typeof(object)) ?? fieldType) switch
+        {
+            { } t when t == typeof(Guid) => "Use an id as the service gave it, like 3f2a9c1e-4b5d-4e6f-8a7b-9c0d1e2f3a4b.",
+            { } t when t == typeof(int) || t == typeof(long) => "Use a whole number, without quotes.",
+            { } t when t == typeof(double) || t == typeof(decimal) => "Use a number with a decimal point, without quotes.",
+            { } t when t == typeof(bool) => "Use true or false, without quotes.",
+            { } t when t == typeof(string) => "Use text in double quotes.",
+            _ => "This value has the wrong type.",
+        };
     }
 
     /// <summary>The .NET type of the field at a JSON path ("$.samples[0].bottle") of the endpoint's request body.</summary>

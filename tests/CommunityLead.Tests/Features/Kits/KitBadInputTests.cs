@@ -215,3 +215,20 @@ public class KitBadInputTests
             : SendJson(client, new HttpMethod(method), $"/api/kits/{code}{route}", body);
     }
 }
+
+public class WrongValueMessageTests
+{
+    [Theory]
+    [InlineData("{\"householdId\":\"not-a-guid\",\"kind\":\"water\"}", "householdId", "like 3f2a9c1e")]
+    [InlineData("{\"householdId\":\"3f2a9c1e-4b5d-4e6f-8a7b-9c0d1e2f3a4b\",\"kind\":7}", "kind", "Use one of")]
+    public async Task IssueKit_ValueOfTheWrongForm_FieldProblemSaysWhatToSend(string body, string field, string advice)
+    {
+        using var app = new CommunityLead.Tests.Infrastructure.CommunityLeadFactory();
+        var client = app.CreateClient(CommunityLead.Api.Auth.Roles.Coordinator);
+        var response = await client.PostAsync("/api/kits", new StringContent(body, System.Text.Encoding.UTF8, "application/json"));
+        Assert.Equal(System.Net.HttpStatusCode.BadRequest, response.StatusCode);
+        var problem = System.Text.Json.Nodes.JsonNode.Parse(await response.Content.ReadAsStringAsync())!;
+        Assert.Equal("The request has invalid fields.", problem["title"]!.GetValue<string>());
+        Assert.Contains(advice, problem["errors"]![field]![0]!.GetValue<string>());
+    }
+}
