@@ -6,6 +6,7 @@ namespace CommunityLead.Api.Commands;
 /// <summary>
 /// backup FILE: SQLite's VACUUM INTO writes a consistent snapshot from one read transaction, so the
 /// service can keep taking writes meanwhile. Restore by stopping the service and copying FILE back.
+/// On PostgreSQL the server's own pg_dump does this job (deploy/README.md).
 /// </summary>
 internal sealed class BackupCommand(string[] args) : ICommand
 {
@@ -24,6 +25,11 @@ internal sealed class BackupCommand(string[] args) : ICommand
         }
         await using var scope = services.CreateAsyncScope();
         var db = scope.ServiceProvider.GetRequiredService<CommunityLeadDb>();
+        if (!db.Database.IsSqlite())
+        {
+            error.WriteLine("backup copies a SQLite database. This service runs on PostgreSQL: use pg_dump (see deploy/README.md, \"Backups with PostgreSQL\").");
+            return CommandLine.UsageError;
+        }
         await db.Database.ExecuteSqlAsync($"VACUUM INTO {target}");
         output.WriteLine($"Backup written to {target}.");
         return 0;

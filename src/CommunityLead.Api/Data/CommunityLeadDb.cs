@@ -4,11 +4,17 @@ using Microsoft.EntityFrameworkCore;
 namespace CommunityLead.Api.Data;
 
 /// <summary>
-/// The program's store. Handlers use it directly; there is no repository layer over EF Core.
-/// Add a migration: dotnet ef migrations add &lt;Name&gt; --project src/CommunityLead.Api --output-dir Data/Migrations
+/// The program's store, on SQLite. Handlers use it directly; there is no repository layer over EF Core.
+/// <see cref="PostgresCommunityLeadDb"/> is the same model on PostgreSQL with its own migrations;
+/// DEVELOPERS.md says how to add a migration for both.
 /// </summary>
-public class CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : DbContext(options)
+public class CommunityLeadDb : DbContext
 {
+    public CommunityLeadDb(DbContextOptions<CommunityLeadDb> options) : base(options) { }
+
+    /// <summary>For a provider's derived context, which needs options typed to itself.</summary>
+    protected CommunityLeadDb(DbContextOptions options) : base(options) { }
+
     public DbSet<Household> Households => Set<Household>();
     public DbSet<Kit> Kits => Set<Kit>();
     public DbSet<Collection> Collections => Set<Collection>();

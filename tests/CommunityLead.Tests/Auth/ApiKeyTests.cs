@@ -33,7 +33,7 @@ public class ApiKeyTests
         Assert.NotEqual(Convert.ToHexString(rows[0].Salt), Convert.ToHexString(rows[1].Salt));
     }
 
-    [Fact]
+    [SqliteFact]
     public void ApiKey_Secret_AppearsNowhereInTheDatabaseFiles()
     {
         using var app = new CommunityLeadFactory();

@@ -9,7 +9,7 @@ namespace CommunityLead.Tests.Commands;
 
 public class BackupUnderWritesTests
 {
-    [Fact]
+    [SqliteFact]
     public async Task Backup_WhileHouseholdsSignUp_CopyIsConsistentAndHoldsEveryRowCommittedBeforeIt()
     {
         using var app = new CommunityLeadFactory();

@@ -80,7 +80,19 @@ public class CommandTests
         Assert.Equal(4, app.WithDb(db => db.LabBatches.Count()));
     }
 
-    [Fact]
+    [PostgresFact]
+    public async Task Backup_OnPostgres_RefusesAndPointsToPgDump()
+    {
+        using var app = new CommunityLeadFactory();
+        var target = Path.Combine(Path.GetTempPath(), $"cl-{Guid.NewGuid():N}.db");
+        var (exit, output, error) = await RunAsync(app, "backup", target);
+        Assert.NotEqual(0, exit);
+        Assert.Contains("pg_dump", error);
+        Assert.Empty(output.Trim());
+        Assert.False(File.Exists(target));
+    }
+
+    [SqliteFact]
     public async Task Backup_WritesACopyThatOpensWithTheSameRows()
     {
         using var app = new CommunityLeadFactory();

@@ -9,25 +9,30 @@ using Microsoft.Extensions.DependencyInjection.Extensions;
 namespace CommunityLead.Tests.Infrastructure;
 
 /// <summary>
-/// The real app on a real SQLite file of its own: one factory per test, never a shared database.
+/// The real app on a real database of its own: one factory per test, never a shared database. A SQLite
+/// file by default; a PostgreSQL database when the run is pointed at a server (<see cref="TestStore"/>).
 /// <see cref="CreateClient(string)"/> signs in as a role with a freshly made key.
 /// </summary>
 public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
 {
     private readonly string folder = Path.Combine(Path.GetTempPath(), "cl-tests", Guid.NewGuid().ToString("N"));
 
-    public CommunityLeadFactory(DateTimeOffset? now = null) =>
+    public CommunityLeadFactory(DateTimeOffset? now = null)
+    {
         Clock = new TestClock(now ?? new DateTimeOffset(2026, 4, 10, 12, 0, 0, TimeSpan.Zero));
+        ConnectionString = TestStore.IsPostgres ? TestStore.CreatePostgresDatabase() : $"Data Source={DatabaseFile}";
+    }
 
     public TestClock Clock { get; }
     public string DatabaseFile => Path.Combine(folder, "test.db");
-    public string ConnectionString => $"Data Source={DatabaseFile}";
+    public string ConnectionString { get; }
 
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         Directory.CreateDirectory(folder);
         builder.UseEnvironment("Testing");
         builder.UseSetting("ConnectionStrings:CommunityLead", ConnectionString);
+        builder.UseSetting("Database:Provider", TestStore.IsPostgres ? "Postgres" : "Sqlite");
         builder.ConfigureServices(services =>
         {
             services.RemoveAll<TimeProvider>();
@@ -58,6 +63,11 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
     protected override void Dispose(bool disposing)
     {
         base.Dispose(disposing);
+        if (TestStore.IsPostgres)
+        {
+            TestStore.DropPostgresDatabase(ConnectionString);
+            return;
+        }
         SqliteConnection.ClearAllPools();
         try { Directory.Delete(folder, recursive: true); } catch (IOException) { }
     }

@@ -37,7 +37,7 @@ public class StorageTests
         Assert.Equal(1, app.WithDb(db => db.AuditTrail.Count(a => a.Action == "cancel")));
     }
 
-    [Fact]
+    [SqliteFact]
     public void Storage_Database_RunsInWriteAheadLogMode()
     {
         using var app = new CommunityLeadFactory();
@@ -46,8 +46,8 @@ public class StorageTests
     }
 
     [Theory]
-    [InlineData("UPDATE AuditTrail SET Reason = 'rewritten'")]
-    [InlineData("DELETE FROM AuditTrail")]
+    [InlineData("UPDATE \"AuditTrail\" SET \"Reason\" = 'rewritten'")]
+    [InlineData("DELETE FROM \"AuditTrail\"")]
     public async Task AuditTrail_UpdateOrDelete_RefusedByTheDatabase(string sql)
     {
         using var app = new CommunityLeadFactory();

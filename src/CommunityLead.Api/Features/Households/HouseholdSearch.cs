@@ -21,11 +21,12 @@ public static class HouseholdSearch
         if (!string.IsNullOrWhiteSpace(areaCode)) query = query.Where(h => h.AreaCode == areaCode.Trim().ToLowerInvariant());
         if (!string.IsNullOrWhiteSpace(search))
         {
-            // The person's text is matched literally: % and _ mean themselves, not LIKE wildcards.
-            var pattern = "%" + search.Trim().Replace("\\", "\\\\").Replace("%", "\\%").Replace("_", "\\_") + "%";
-            query = query.Where(h => EF.Functions.Like(h.Name, pattern, "\\") || EF.Functions.Like(h.Phone!, pattern, "\\")
-                || EF.Functions.Like(h.Email!, pattern, "\\") || EF.Functions.Like(h.Address.Line1, pattern, "\\")
-                || EF.Functions.Like(h.Address.PostalCode, pattern, "\\"));
+            // Matched literally and without regard to case, the same on SQLite and PostgreSQL (LIKE differs:
+            // SQLite's ignores case, PostgreSQL's does not). % and _ mean themselves.
+            var term = search.Trim().ToLowerInvariant();
+            query = query.Where(h => h.Name.ToLower().Contains(term) || h.Phone!.ToLower().Contains(term)
+                || h.Email!.ToLower().Contains(term) || h.Address.Line1.ToLower().Contains(term)
+                || h.Address.PostalCode.ToLower().Contains(term));
         }
         var total = await query.CountAsync(ct);
         var items = await query.OrderBy(h => h.Name).ThenBy(h => h.Id).Skip((page - 1) * pageSize).Take(pageSize)

@@ -1,0 +1,88 @@
+using CommunityLead.Api.Data;
+using Microsoft.Data.Sqlite;
+using Microsoft.EntityFrameworkCore;
+using Npgsql;
+
+namespace CommunityLead.Tests.Infrastructure;
+
+/// <summary>
+/// Which database the integration tests run on. SQLite unless COMMUNITYLEAD_TEST_POSTGRES holds a connection
+/// string for a PostgreSQL role allowed to create databases; then every test gets a database of its own there,
+/// copied from a template migrated once per run (copying is much faster than migrating each time).
+/// </summary>
+public static class TestStore
+{
+    public const string Variable = "COMMUNITYLEAD_TEST_POSTGRES";
+
+    private static readonly string? Server = Environment.GetEnvironmentVariable(Variable) is { Length: > 0 } s ? s : null;
+    private static readonly Lazy<string> Template = new(CreateTemplate);
+
+    public static bool IsPostgres => Server is not null;
+
+    /// <summary>A fresh, migrated database; returns its connection string.</summary>
+    public static string CreatePostgresDatabase()
+    {
+        var name = $"cl_test_{Guid.NewGuid():N}";
+        Execute($"CREATE DATABASE \"{name}\" TEMPLATE \"{Template.Value}\"");
+        return For(name);
+    }
+
+    public static void DropPostgresDatabase(string connectionString)
+    {
+        NpgsqlConnection.ClearPool(new NpgsqlConnection(connectionString));
+        var name = new NpgsqlConnectionStringBuilder(connectionString).Database;
+        Execute($"DROP DATABASE IF EXISTS \"{name}\" WITH (FORCE)");
+    }
+
+    public static void ClearPools()
+    {
+        if (IsPostgres) NpgsqlConnection.ClearAllPools();
+        else SqliteConnection.ClearAllPools();
+    }
+
+    private static string CreateTemplate()
+    {
+        var name = $"cl_template_{Guid.NewGuid():N}";
+        Execute($"CREATE DATABASE \"{name}\"");
+        var connection = For(name);
+        using (var db = new PostgresCommunityLeadDb(new DbContextOptionsBuilder<PostgresCommunityLeadDb>().UseNpgsql(connection).Options))
+            db.Database.Migrate();
+        // A database can only be copied while nobody is connected to it.
+        NpgsqlConnection.ClearPool(new NpgsqlConnection(connection));
+        AppDomain.CurrentDomain.ProcessExit += (_, _) =>
+        {
+            try { Execute($"DROP DATABASE IF EXISTS \"{name}\" WITH (FORCE)"); } catch (NpgsqlException) { }
+        };
+        return name;
+    }
+
+    private static string For(string database) =>
+        new NpgsqlConnectionStringBuilder(Server) { Database = database }.ConnectionString;
+
+    private static void Execute(string sql)
+    {
+        // Maintenance commands run from the server's own "postgres" database, never from a test's.
+        using var connection = new NpgsqlConnection(For("postgres"));
+        connection.Open();
+        using var command = new NpgsqlCommand(sql, connection);
+        command.ExecuteNonQuery();
+    }
+}
+
+/// <summary>A test that only means something on SQLite (the file itself, WAL, VACUUM INTO).</summary>
+public sealed class SqliteFactAttribute : FactAttribute
+{
+    public SqliteFactAttribute()
+    {
+        if (TestStore.IsPostgres) Skip = "SQLite only: this test reads the SQLite file or its settings.";
+    }
+}
+
+/// <summary>A test that only means something on PostgreSQL (several instances on one server).</summary>
+public sealed class PostgresFactAttribute : FactAttribute
+{
+    public PostgresFactAttribute()
+    {
+        if (!TestStore.IsPostgres) Skip = $"PostgreSQL only: set {TestStore.Variable} to run it.";
+    }
+}
