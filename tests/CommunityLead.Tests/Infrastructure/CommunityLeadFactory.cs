@@ -17,10 +17,17 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
 {
     private readonly string folder = Path.Combine(Path.GetTempPath(), "cl-tests", Guid.NewGuid().ToString("N"));
 
-    public CommunityLeadFactory(DateTimeOffset? now = null)
+    private readonly bool ownsDatabase;
+
+    /// <param name="now">The test clock's start.</param>
+    /// <param name="sharedConnectionString">Another instance's database (a second service instance on the same
+    /// store); this factory then leaves it in place when disposed.</param>
+    public CommunityLeadFactory(DateTimeOffset? now = null, string? sharedConnectionString = null)
     {
         Clock = new TestClock(now ?? new DateTimeOffset(2026, 4, 10, 12, 0, 0, TimeSpan.Zero));
-        ConnectionString = TestStore.IsPostgres ? TestStore.CreatePostgresDatabase() : $"Data Source={DatabaseFile}";
+        ownsDatabase = sharedConnectionString is null;
+        ConnectionString = sharedConnectionString
+            ?? (TestStore.IsPostgres ? TestStore.CreatePostgresDatabase() : $"Data Source={DatabaseFile}");
     }
 
     public TestClock Clock { get; }
@@ -65,7 +72,7 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
         base.Dispose(disposing);
         if (TestStore.IsPostgres)
         {
-            TestStore.DropPostgresDatabase(ConnectionString);
+            if (ownsDatabase) TestStore.DropPostgresDatabase(ConnectionString);
             return;
         }
         SqliteConnection.ClearAllPools();

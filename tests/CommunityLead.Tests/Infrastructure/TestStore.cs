@@ -27,6 +27,24 @@ public static class TestStore
         return For(name);
     }
 
+    /// <summary>A database with nothing in it yet, on whichever store the run uses; dropped when disposed.</summary>
+    public static EmptyDatabase CreateEmptyDatabase()
+    {
+        if (!IsPostgres)
+        {
+            var folder = Directory.CreateTempSubdirectory("cl-empty").FullName;
+            return new EmptyDatabase($"Data Source={Path.Combine(folder, "empty.db")}", () =>
+            {
+                SqliteConnection.ClearAllPools();
+                try { Directory.Delete(folder, recursive: true); } catch (IOException) { }
+            });
+        }
+        var name = $"cl_empty_{Guid.NewGuid():N}";
+        Execute($"CREATE DATABASE \"{name}\"");
+        var connection = For(name);
+        return new EmptyDatabase(connection, () => DropPostgresDatabase(connection));
+    }
+
     public static void DropPostgresDatabase(string connectionString)
     {
         NpgsqlConnection.ClearPool(new NpgsqlConnection(connectionString));
@@ -67,6 +85,12 @@ public static class TestStore
         using var command = new NpgsqlCommand(sql, connection);
         command.ExecuteNonQuery();
     }
+}
+
+public sealed class EmptyDatabase(string connectionString, Action drop) : IDisposable
+{
+    public string ConnectionString { get; } = connectionString;
+    public void Dispose() => drop();
 }
 
 /// <summary>A test that only means something on SQLite (the file itself, WAL, VACUUM INTO).</summary>

@@ -1,0 +1,98 @@
+using System.Net;
+using System.Net.Http.Json;
+using CommunityLead.Api.Auth;
+using CommunityLead.Tests.Features.Interpretation;
+using Microsoft.EntityFrameworkCore;
+using static CommunityLead.Tests.Infrastructure.Fixtures;
+
+namespace CommunityLead.Tests.Infrastructure;
+
+/// <summary>
+/// Two service instances on one database, as behind a load balancer: nothing may live only in one process.
+/// On the SQLite run both share one file; on the PostgreSQL run, one server database.
+/// </summary>
+public class TwoInstancesTests
+{
+    [Fact]
+    public async Task TwoInstances_StartingTogetherOnAnEmptyDatabase_BothMigrateAndServe()
+    {
+        using var empty = TestStore.CreateEmptyDatabase();
+        using var a = new CommunityLeadFactory(sharedConnectionString: empty.ConnectionString);
+        using var b = new CommunityLeadFactory(sharedConnectionString: empty.ConnectionString);
+
+        // Starting a host applies migrations; EF Core's migration lock must make the second wait, not fail.
+        var clients = await Task.WhenAll(Task.Run(() => a.CreateClient()), Task.Run(() => b.CreateClient()));
+
+        foreach (var client in clients) Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/health")).StatusCode);
+        var applied = a.WithDb(db => db.Database.GetAppliedMigrations().ToList());
+        Assert.Equal(a.WithDb(db => db.Database.GetMigrations().ToList()), applied);
+        await IssueKitAsync(b.CreateClient(Roles.Coordinator));
+        Assert.Equal(1, a.WithDb(db => db.Kits.Count()));
+    }
+
+    [Fact]
+    public async Task TwoInstances_KeyMadeOnOne_SignsInOnTheOther_AndRevokedOnOne_IsRefusedByTheOther()
+    {
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var key = a.CreateKey(Roles.Coordinator, "front-desk");
+        var onB = b.CreateClient();
+        onB.DefaultRequestHeaders.Authorization = new("Bearer", key);
+        Assert.Equal(HttpStatusCode.OK, (await onB.GetAsync("/api/kits")).StatusCode);
+
+        var admin = a.CreateClient(Roles.Admin);
+        var keyId = key.Split('_')[1];
+        a.WithDb(db => db.ApiKeys.Where(k => k.KeyId == keyId).ExecuteUpdate(s => s.SetProperty(k => k.RevokedAtUtc, DateTime.UtcNow)));
+        Assert.Equal(HttpStatusCode.Unauthorized, (await onB.GetAsync("/api/kits")).StatusCode);
+        Assert.Equal(HttpStatusCode.OK, (await admin.GetAsync("/api/admin/keys")).StatusCode);
+    }
+
+    [Fact]
+    public async Task TwoInstances_RacingMovesOnOneKit_ExactlyOneWinsAcrossBoth()
+    {
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var onA = a.CreateClient(Roles.Coordinator);
+        var onB = b.CreateClient(Roles.Coordinator);
+        var code = await IssueKitAsync(onA);
+
+        var moves = Enumerable.Range(0, 8).Select(i =>
+            (i % 2 == 0 ? onA : onB).PostAsJsonAsync($"/api/kits/{code}/cancel", new { reason = $"attempt {i}" }));
+        var statuses = (await Task.WhenAll(moves)).Select(r => r.StatusCode).ToList();
+
+        Assert.Equal(1, statuses.Count(s => s == HttpStatusCode.OK));
+        Assert.All(statuses.Where(s => s != HttpStatusCode.OK), s => Assert.Equal(HttpStatusCode.Conflict, s));
+        Assert.Equal(1, a.WithDb(db => db.AuditTrail.Count(e => e.Action == "cancel")));
+    }
+
+    [Fact]
+    public async Task TwoInstances_SameBatchPostedToBoth_IsStoredOnce()
+    {
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var code = await new ResultsFlow(a).ReceivedKitAsync();
+        var batch = new
+        {
+            batchId = "B-TWICE-1", method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
+            results = new object[]
+            {
+                new { kitCode = code, bottle = "first-draw", analyte = "lead", value = 4.2, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 },
+                new { kitCode = code, bottle = "flushed", analyte = "lead", value = 1.1, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 },
+            },
+            qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = 10.1, unit = "ug/L" } },
+        };
+
+        var posts = new[] { a, b, a, b }.Select(app => app.CreateClient(Roles.Lab).PostAsJsonAsync("/api/lab/batches", batch));
+        var statuses = (await Task.WhenAll(posts)).Select(r => r.StatusCode).ToList();
+
+        // One post stores the batch; the others are repeats (200) or lost the race cleanly (409), never a 500.
+        Assert.Equal(1, statuses.Count(s => s == HttpStatusCode.Created));
+        Assert.All(statuses, s => Assert.Contains(s, new[] { HttpStatusCode.Created, HttpStatusCode.OK, HttpStatusCode.Conflict }));
+        Assert.Equal(1, a.WithDb(db => db.LabBatches.Count(x => x.BatchId == "B-TWICE-1")));
+        Assert.Equal(2, a.WithDb(db => db.LabResults.Count()));
+        // The instance that stored nothing serves the stored interpretation of the one result set.
+        var interpretation = await GetAsync(b.CreateClient(Roles.Coordinator), $"/api/kits/{code}/interpretation");
+        Assert.False(interpretation["provisional"]!.GetValue<bool>());
+        Assert.Equal(2, interpretation["findings"]!.AsArray().Count);
+    }
+}
