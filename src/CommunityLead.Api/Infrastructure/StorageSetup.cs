@@ -1,6 +1,9 @@
 using CommunityLead.Api.Data;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Infrastructure;
+using Microsoft.EntityFrameworkCore.Migrations;
+using Npgsql;
 
 namespace CommunityLead.Api.Infrastructure;
 
@@ -51,6 +54,28 @@ public static class StorageSetup
             var folder = Path.GetDirectoryName(Path.GetFullPath(file));
             if (!string.IsNullOrEmpty(folder)) Directory.CreateDirectory(folder);
         }
+        else
+        {
+            await CreateHistoryTableAsync(db);
+        }
         await db.Database.MigrateAsync();
+    }
+
+    /// <summary>
+    /// On an empty PostgreSQL database EF Core reads the migrations history before creating it and logs the
+    /// failed read as an error ("fail: … __EFMigrationsHistory"), which looks like a broken first start.
+    /// Creating the table first avoids that. Two instances may race to create it: the loser's error is harmless.
+    /// </summary>
+    private static async Task CreateHistoryTableAsync(CommunityLeadDb db)
+    {
+        var history = db.GetService<IHistoryRepository>();
+        if (await history.ExistsAsync()) return;
+        try
+        {
+            await db.Database.ExecuteSqlRawAsync(history.GetCreateIfNotExistsScript());
+        }
+        catch (PostgresException e) when (e.SqlState is PostgresErrorCodes.UniqueViolation or PostgresErrorCodes.DuplicateTable)
+        {
+        }
     }
 }
