@@ -14,6 +14,12 @@ public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock)
 {
     private const string Prefix = "clk";
 
+    /// <summary>The audit trail names a key by its label, in a subject key of 64 characters (the label column holds 100).</summary>
+    public const int LabelMaxLength = 64;
+
+    /// <summary>Random bytes of the public id, written as hex (twice as many characters).</summary>
+    public const int KeyIdBytes = 8;
+
     public sealed record Created(string Label, string Role, string Key);
     public sealed record Verified(string Label, string Role);
 
@@ -21,12 +27,12 @@ public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock)
     {
         if (!Roles.All.Contains(role))
             throw new KeyCommandException($"Unknown role '{role}'. Roles: {string.Join(", ", Roles.All)}.");
-        if (string.IsNullOrWhiteSpace(label) || label.Length > 100)
-            throw new KeyCommandException("A label of 1 to 100 characters is required.");
+        if (string.IsNullOrWhiteSpace(label) || label.Length > LabelMaxLength)
+            throw new KeyCommandException($"A label of 1 to {LabelMaxLength} characters is required.");
         if (await db.ApiKeys.AnyAsync(k => k.Label == label, ct))
             throw new KeyCommandException($"A key labelled '{label}' already exists; labels are never reused.");
 
-        var keyId = Convert.ToHexStringLower(RandomNumberGenerator.GetBytes(8));
+        var keyId = Convert.ToHexStringLower(RandomNumberGenerator.GetBytes(KeyIdBytes));
         var secret = Convert.ToHexStringLower(RandomNumberGenerator.GetBytes(32));
         var salt = RandomNumberGenerator.GetBytes(16);
         db.ApiKeys.Add(new ApiKey

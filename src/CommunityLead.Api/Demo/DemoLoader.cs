@@ -8,6 +8,7 @@ using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Kits;
 using CommunityLead.Rules.Sampling;
 using FluentValidation;
+using FluentValidation.Results;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.Options;
 
@@ -41,6 +42,7 @@ public static class DemoLoader
         var db = scope.ServiceProvider.GetRequiredService<CommunityLeadDb>();
         var validator = scope.ServiceProvider.GetRequiredService<IValidator<HouseholdRequest>>();
         var collectionValidator = scope.ServiceProvider.GetRequiredService<IValidator<CollectionRequest>>();
+        var reasonValidator = scope.ServiceProvider.GetRequiredService<IValidator<ReasonRequest>>();
         var limits = scope.ServiceProvider.GetRequiredService<IOptions<SamplingLimits>>().Value;
         var existing = (await db.Households.Select(h => h.Id).ToListAsync()).ToHashSet();
         int newHouseholds = 0, newKits = 0;
@@ -53,12 +55,11 @@ public static class DemoLoader
                 error.WriteLine($"{file}: household {entry.Id}: {string.Join("; ", check.Errors.Select(e => $"{e.PropertyName}: {e.ErrorMessage}"))}");
                 return null;
             }
-            var badCollection = entry.Kits.Where(k => k.Collection is not null)
-                .Select(k => (k.Code, Result: collectionValidator.Validate(new CollectionRequest(k.Collection!.Samples))))
-                .FirstOrDefault(r => !r.Result.IsValid);
-            if (badCollection.Result is not null)
+            var badKit = entry.Kits.Select(k => (k.Code, Errors: Check(k, collectionValidator, reasonValidator)))
+                .FirstOrDefault(k => k.Errors.Count > 0);
+            if (badKit.Errors is not null)
             {
-                error.WriteLine($"{file}: kit {badCollection.Code}: {string.Join("; ", badCollection.Result.Errors.Select(e => $"{e.PropertyName}: {e.ErrorMessage}"))}");
+                error.WriteLine($"{file}: kit {badKit.Code}: {string.Join("; ", badKit.Errors.Select(e => $"{e.PropertyName}: {e.ErrorMessage}"))}");
                 return null;
             }
             var household = HouseholdMapping.NewHousehold(entry.Household, entry.Household.ConsentGivenAt!.Value.UtcDateTime);
@@ -85,7 +86,9 @@ public static class DemoLoader
         {
             Code = KitCode.Parse(d.Code).Code ?? throw new InvalidDataException($"Demo kit code {d.Code} fails its check character."),
             Kind = d.Kind, State = KitState.Issued, HouseholdId = householdId,
-            IssuedAtUtc = issued, UpdatedAtUtc = issued, ReplacesCode = d.Replaces,
+            IssuedAtUtc = issued, UpdatedAtUtc = issued,
+            ReplacesCode = d.Replaces is null ? null
+                : KitCode.Parse(d.Replaces).Code ?? throw new InvalidDataException($"Demo kit {d.Code} replaces {d.Replaces}, which fails its check character."),
         };
         db.Kits.Add(kit);
         db.AuditTrail.Add(Audit.Kit(Loader, issued, kit.Code, "issue", to: KebabEnum.Name(KitState.Issued), detail: "demo scenario"));
@@ -115,6 +118,13 @@ public static class DemoLoader
         }
         return kit;
     }
+
+    /// <summary>The bottles and the final move's reason pass the API's own validators: the demo stores nothing the API would refuse.</summary>
+    private static List<ValidationFailure> Check(DemoKit kit, IValidator<CollectionRequest> collection, IValidator<ReasonRequest> reason) =>
+    [
+        .. kit.Collection is { } c ? collection.Validate(new CollectionRequest(c.Samples)).Errors : [],
+        .. kit.Then is { } then ? reason.Validate(new ReasonRequest(then.Reason)).Errors : [],
+    ];
 
     private static void Move(CommunityLeadDb db, Kit kit, KitAction action, DateTime atUtc, string? reason, string? detail)
     {

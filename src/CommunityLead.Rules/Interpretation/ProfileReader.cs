@@ -10,6 +10,9 @@ namespace CommunityLead.Rules.Interpretation;
 /// </summary>
 public static partial class ProfileReader
 {
+    /// <summary>Every interpretation and letter stores the id it was made with, in a column of this many characters.</summary>
+    public const int IdMaxLength = 60;
+
     private static readonly IReadOnlyList<string> Fields = ["id", "version", "name", "jurisdiction", "notes", "levels"];
 
     public static RuleProfile Read(string fileName, string json)
@@ -19,6 +22,8 @@ public static partial class ProfileReader
         var id = profile.Text("id");
         if (!IdPattern().IsMatch(id))
             throw profile.Problem("id", $"\"{id}\" may hold only lower-case letters, digits and hyphens");
+        if (id.Length > IdMaxLength)
+            throw profile.Problem("id", $"\"{id}\" is {id.Length} characters long; an id has at most {IdMaxLength}");
         var version = profile.WholeNumber("version");
         if (version < 1) throw profile.Problem("version", $"must be 1 or more, not {version}");
         var name = profile.Text("name");

@@ -35,6 +35,24 @@ public class CommandTests
         Assert.Equal(HttpStatusCode.Unauthorized, (await client.GetAsync("/api/kits")).StatusCode);
     }
 
+    [Fact]
+    public async Task KeysCreate_LabelOverTheLimit_RefusedSayingItAndNothingWritten()
+    {
+        // The audit trail names the key by its label, in a 64-character subject key: a longer label broke the
+        // command on PostgreSQL (value too long) after it had said nothing was wrong.
+        using var app = new CommunityLeadFactory();
+        var limit = CommunityLead.Api.Auth.ApiKeyService.LabelMaxLength;
+        var (keys, audit) = (app.WithDb(db => db.ApiKeys.Count()), app.WithDb(db => db.AuditTrail.Count()));
+
+        var (exit, output, error) = await RunAsync(app, "keys", "create", "--role", "lab", "--label", new string('l', limit + 1));
+
+        Assert.Equal(CommandLine.UsageError, exit);
+        Assert.Contains($"1 to {limit} characters", error);
+        Assert.Empty(output.Trim());
+        Assert.Equal((keys, audit), (app.WithDb(db => db.ApiKeys.Count()), app.WithDb(db => db.AuditTrail.Count())));
+        Assert.Equal(0, (await RunAsync(app, "keys", "create", "--role", "lab", "--label", new string('l', limit))).Exit);
+    }
+
     [Theory]
     [InlineData("keys", "create", "--role", "janitor", "--label", "x")]
     [InlineData("keys", "create", "--label", "no-role")]

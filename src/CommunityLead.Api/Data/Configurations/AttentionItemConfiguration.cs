@@ -9,7 +9,7 @@ public class AttentionItemConfiguration : IEntityTypeConfiguration<AttentionItem
     public void Configure(EntityTypeBuilder<AttentionItem> b)
     {
         b.Property(a => a.KitCode).HasMaxLength(16);
-        b.Property(a => a.Detail).HasMaxLength(500);
+        b.Property(a => a.Detail).HasMaxLength(AttentionItem.DetailMaxLength);
         b.Property(a => a.ResolvedBy).HasMaxLength(100);
         b.Property(a => a.ResolutionNote).HasMaxLength(500);
         b.HasIndex(a => new { a.ResolvedAtUtc, a.Priority, a.RaisedAtUtc });

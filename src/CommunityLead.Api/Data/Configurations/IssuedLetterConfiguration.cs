@@ -1,4 +1,5 @@
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Rules.Interpretation;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Metadata.Builders;
 
@@ -9,7 +10,7 @@ public class IssuedLetterConfiguration : IEntityTypeConfiguration<IssuedLetter>
     public void Configure(EntityTypeBuilder<IssuedLetter> b)
     {
         b.Property(l => l.KitCode).HasMaxLength(16);
-        b.Property(l => l.ProfileId).HasMaxLength(60);
+        b.Property(l => l.ProfileId).HasMaxLength(ProfileReader.IdMaxLength);
         b.Property(l => l.Sha256).HasMaxLength(64);
         b.Property(l => l.IssuedBy).HasMaxLength(100);
         b.Property(l => l.SentBy).HasMaxLength(100);

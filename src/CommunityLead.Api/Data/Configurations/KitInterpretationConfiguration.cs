@@ -1,4 +1,5 @@
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Rules.Interpretation;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Metadata.Builders;
 
@@ -9,7 +10,7 @@ public class KitInterpretationConfiguration : IEntityTypeConfiguration<KitInterp
     public void Configure(EntityTypeBuilder<KitInterpretation> b)
     {
         b.Property(i => i.KitCode).HasMaxLength(16);
-        b.Property(i => i.ProfileId).HasMaxLength(60);
+        b.Property(i => i.ProfileId).HasMaxLength(ProfileReader.IdMaxLength);
         b.Property(i => i.CreatedBy).HasMaxLength(100);
         b.HasIndex(i => new { i.KitId, i.SupersededAtUtc });
         b.HasOne<Kit>().WithMany().HasForeignKey(i => i.KitId).OnDelete(DeleteBehavior.Restrict);

@@ -8,6 +8,9 @@ namespace CommunityLead.Api.Data.Entities;
 /// </summary>
 public class AttentionItem
 {
+    /// <summary>What the Detail column holds; <c>AttentionText</c> keeps composed lines within it.</summary>
+    public const int DetailMaxLength = 500;
+
     public int Id { get; set; }
     public int KitId { get; set; }
     public required string KitCode { get; set; }

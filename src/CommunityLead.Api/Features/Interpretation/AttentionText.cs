@@ -1,4 +1,5 @@
 using System.Globalization;
+using CommunityLead.Api.Data.Entities;
 using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.LabResults;
 using KitOutcome = CommunityLead.Rules.Interpretation.Interpretation;
@@ -15,10 +16,27 @@ public static class AttentionText
             $"At or above the action level ({Worst(outcome)}) in a home with a child under 6 or a pregnancy: call first and offer help.",
         AttentionFlag.ActionLevel => $"At or above the action level ({Worst(outcome)}): call and offer help.",
         AttentionFlag.SuspectedServiceLine => "Lead points to the service line or pipes further out: tell the household and the utility.",
-        AttentionFlag.RetestNeeded =>
-            $"The sample needs to be taken again: {string.Join(" ", outcome.Validity.Select(v => v.Reason).Distinct())}".Trim(),
+        AttentionFlag.RetestNeeded => Retest([.. outcome.Validity.Select(v => v.Reason).Distinct()]),
         _ => "Corrected result after the letter: a new letter is needed.",
     };
+
+    /// <summary>
+    /// Every reason while the line has room. A sequential kit can carry a reason per bottle (30 of them), more
+    /// than the stored line holds; the rest are counted, and the kit's interpretation lists them all. One reason
+    /// always fits: each is a stored collection flag (300 characters at most) or a fixed sentence.
+    /// </summary>
+    private static string Retest(IReadOnlyList<string> reasons)
+    {
+        string Line(int shown)
+        {
+            var text = string.Join(" ", reasons.Take(shown).Prepend("The sample needs to be taken again:"));
+            var more = reasons.Count - shown;
+            return more == 0 ? text : $"{text} (And {more} more on the kit's interpretation.)";
+        }
+        var shown = reasons.Count;
+        while (shown > 1 && Line(shown).Length > AttentionItem.DetailMaxLength) shown--;
+        return Line(shown);
+    }
 
     /// <summary>The most serious finding (lead before copper at the same band), e.g. "22.3 µg/L lead".</summary>
     private static string Worst(KitOutcome outcome)

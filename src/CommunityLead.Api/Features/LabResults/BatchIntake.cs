@@ -92,7 +92,7 @@ public static class BatchIntake
         {
             await db.SaveChangesAsync(ct);
         }
-        catch (DbUpdateException)
+        catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
             // Another post of this batch id won the race, or a kit changed meanwhile: nothing of ours was written.
             return BatchProblems.Raced(batch.BatchId);

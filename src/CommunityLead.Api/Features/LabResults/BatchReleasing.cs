@@ -46,7 +46,7 @@ public static class BatchReleasing
         {
             await db.SaveChangesAsync(ct);
         }
-        catch (DbUpdateException)
+        catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
             return BatchProblems.Raced(batchId);
         }

@@ -37,6 +37,10 @@ internal sealed class QcRowCheck(List<BatchProblem> problems, IReadOnlySet<strin
             if (Value(row, field) is < 0) Problem(field, "Cannot be negative.");
         // A calibration blank may read slightly below zero; other measurements may not.
         if (type != QcType.CalibrationBlank && row.Measured is < 0) Problem("measured", "Cannot be negative.");
+        // mg/L becomes µg/L by × 1000: a figure near double's limit would turn into infinity, which JSON cannot hold.
+        foreach (var field in new[] { "expected", "measured", "unspiked", "spikeAdded", "duplicate" })
+            if (Value(row, field) is { } n && !double.IsFinite(n * factor))
+                Problem(field, $"{n} {row.Unit?.Trim()} is too large to convert to {Analytes.NormalUnit(analyte, matrix)}.");
         if (problems.Count > before || incomplete) return null;
 
         return new CheckedQc(new QcSample(type, analyte, row.Expected * factor, row.Measured * factor,

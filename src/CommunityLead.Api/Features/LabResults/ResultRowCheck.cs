@@ -49,6 +49,7 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
             Problem("unit", unitError!);
 
         CheckNumbers(row, Problem, Missing);
+        if (factor > 1) CheckConvertible(row, factor, Analytes.NormalUnit(analyte, matrix), Problem);
         var acidifiedAt = BatchChecker.Time(row.AcidifiedAt);
         if (row.AcidifiedAt is not null && acidifiedAt is null) Problem("acidifiedAt", OffsetRequiredConverter.Message);
         if (acidifiedAt is { } acidified && sample is not null && acidified < sample.CollectedAt)
@@ -94,6 +95,17 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (row.Uncertainty is < 0) problem("uncertainty", "An uncertainty (one standard deviation) cannot be negative.");
         if (row.Replicates is { } reps && (reps.Count > 20 || reps.Any(x => !double.IsFinite(x) || x < 0)))
             problem("replicates", "Up to 20 replicate readings, each a finite number, zero or more.");
+    }
+
+    /// <summary>mg/L becomes µg/L by × 1000: a figure near double's limit would turn into infinity, which JSON cannot hold.</summary>
+    private static void CheckConvertible(ResultRow row, double factor, string unit, Action<string, string> problem)
+    {
+        (string Field, double? Number)[] figures =
+            [("value", row.Value), ("mdl", row.Mdl), ("reportingLimit", row.ReportingLimit), ("uncertainty", row.Uncertainty),
+             ("replicates", row.Replicates?.DefaultIfEmpty().Max())];
+        foreach (var (field, number) in figures)
+            if (number is { } n && !double.IsFinite(n * factor))
+                problem(field, $"{n} {row.Unit?.Trim()} is too large to convert to {unit}; check the figure and its unit.");
     }
 
     private static string Describe(BottleType bottle, int? position, SoilLocation? location) => bottle switch

@@ -131,4 +131,32 @@ public class BatchRefusalTests
         Assert.Equal(["analyzedAt", "batchId", "method", "results"], keys.Order(StringComparer.Ordinal));
         Assert.Equal(before, FootprintOf(app));
     }
+
+    [Theory]
+    [InlineData("value", "/results/0/value")]
+    [InlineData("replicates", "/results/0/replicates")]
+    [InlineData("qc measured", "/qc/1/measured")]
+    public async Task JsonBatch_FigureTooLargeToConvert_422NamingItAndNothingWritten(string figure, string key)
+    {
+        // 1e306 mg/L is a finite number, but × 1000 to µg/L it is not: stored or written as JSON it used to be a 500.
+        using var app = new CommunityLeadFactory();
+        var (coordinator, lab) = (app.CreateClient(Roles.Coordinator), app.CreateClient(Roles.Lab));
+        var kit = await ReceivedKitAsync(coordinator, lab);
+        var batch = Batch("HUGE-1", BothBottles(kit));
+        var first = batch["results"]![0]!.AsObject();
+        (first["unit"], first["value"], first["mdl"], first["reportingLimit"]) = ("mg/L", 0.0124, 0.0003, 0.001);
+        switch (figure)
+        {
+            case "value": first["value"] = 1e306; break;
+            case "replicates": first["replicates"] = new JsonArray(0.0124, 1e306); break;
+            default: (batch["qc"]![1]!["unit"], batch["qc"]![1]!["measured"]) = ("mg/L", 1e306); break;
+        }
+        var before = FootprintOf(app);
+
+        var refused = await PostBatchAsync(lab, batch, HttpStatusCode.UnprocessableEntity);
+
+        Assert.Equal([key], ProblemKeys(refused));
+        Assert.Contains("too large to convert", refused["errors"]![key]![0]!.GetValue<string>());
+        Assert.Equal(before, FootprintOf(app));
+    }
 }

@@ -67,6 +67,17 @@ public class ProfileValidationTests
         Assert.Contains("lower-case letters, digits and hyphens", refusal.Message);
     }
 
+    [Fact]
+    public void Read_IdLongerThanItsColumn_IsRefused()
+    {
+        // Every interpretation and letter stores the profile id in a column of this length.
+        var longest = new string('a', ProfileReader.IdMaxLength);
+        Assert.Equal(longest, ProfileReader.Read(FileName, With(p => p["id"] = longest)).Id);
+
+        var refusal = Refused(With(p => p["id"] = longest + "a"), "id");
+        Assert.Contains($"at most {ProfileReader.IdMaxLength}", refusal.Message);
+    }
+
     [Theory]
     [InlineData(0)]
     [InlineData(-1)]
