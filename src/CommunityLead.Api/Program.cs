@@ -34,6 +34,7 @@ if (app.Configuration.GetValue("Database:MigrateOnStartup", true)) await Storage
 
 app.UseExceptionHandler();
 app.UseStatusCodePages();
+app.Use(NoNulText.InQueryAsync);
 app.UseSwagger();
 app.UseSwaggerUI();
 app.UseAuthentication();

@@ -21,7 +21,7 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
         if (bad.InnerException is JsonException json)
         {
             // Well-formed JSON with a value of the wrong form is a field problem, not broken JSON.
-            problem.Title = json.Message.Contains("could not be converted", StringComparison.Ordinal) || json.Message.StartsWith("Times need", StringComparison.Ordinal)
+            problem.Title = json.Message.Contains("could not be converted", StringComparison.Ordinal) || OwnMessage(json)
                 ? "The request has invalid fields."
                 : "The request body is not valid JSON for this request.";
             problem.Errors[FieldPath.FromJsonPath(json.Path)] = [Explain(json, FieldType(context, json.Path))];
@@ -54,11 +54,14 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
         });
     }
 
+    private static bool OwnMessage(JsonException json) =>
+        json.Message is OffsetRequiredConverter.Message or NoNulText.Message;
+
     // Our own converters throw messages written for people; System.Text.Json's own ones mention .NET types.
     private static string Explain(JsonException json, Type? fieldType)
     {
         var message = json.Message;
-        if (message.StartsWith("Times need", StringComparison.Ordinal)) return message;
+        if (OwnMessage(json)) return message;
         if (message.Contains("could not be mapped", StringComparison.Ordinal)) return "This field is not part of the request.";
         if (!message.Contains("could not be converted", StringComparison.Ordinal)) return "The JSON is malformed here.";
         // For records (all our requests) the message names the record, not the field's type: find it by the path.

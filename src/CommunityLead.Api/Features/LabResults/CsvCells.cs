@@ -1,4 +1,5 @@
 using System.Globalization;
+using CommunityLead.Api.Infrastructure;
 using CsvHelper;
 
 namespace CommunityLead.Api.Features.LabResults;
@@ -10,6 +11,11 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     {
         if (!index.TryGetValue(column, out var i) || i >= csv.FieldCount) return null;
         var value = csv.GetString(i)?.Trim();
+        if (NoNulText.Contains(value))
+        {
+            problems.Add(new(where, column, NoNulText.Message));
+            return null;
+        }
         return string.IsNullOrEmpty(value) ? null : value;
     }
 
