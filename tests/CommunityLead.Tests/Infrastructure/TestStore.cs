@@ -49,7 +49,21 @@ public static class TestStore
     {
         NpgsqlConnection.ClearPool(new NpgsqlConnection(connectionString));
         var name = new NpgsqlConnectionStringBuilder(connectionString).Database;
-        Execute($"DROP DATABASE IF EXISTS \"{name}\" WITH (FORCE)");
+        // Not WITH (FORCE): that must be allowed to end every session, autovacuum's included, which a role
+        // that is not a superuser may not. A plain DROP ends autovacuum itself; a session of ours that is
+        // still closing makes it wait a moment.
+        for (var attempt = 1; ; attempt++)
+        {
+            try
+            {
+                Execute($"DROP DATABASE IF EXISTS \"{name}\"");
+                return;
+            }
+            catch (PostgresException e) when (e.SqlState == PostgresErrorCodes.ObjectInUse && attempt < 50)
+            {
+                Thread.Sleep(100);
+            }
+        }
     }
 
     public static void ClearPools()
@@ -69,7 +83,7 @@ public static class TestStore
         NpgsqlConnection.ClearPool(new NpgsqlConnection(connection));
         AppDomain.CurrentDomain.ProcessExit += (_, _) =>
         {
-            try { Execute($"DROP DATABASE IF EXISTS \"{name}\" WITH (FORCE)"); } catch (NpgsqlException) { }
+            try { Execute($"DROP DATABASE IF EXISTS \"{name}\""); } catch (NpgsqlException) { }
         };
         return name;
     }
