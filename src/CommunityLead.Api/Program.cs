@@ -1,6 +1,7 @@
 using CommunityLead.Api.Commands;
 using CommunityLead.Api.Features.Admin;
 using CommunityLead.Api.Features.Attention;
+using CommunityLead.Api.Features.Health;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Kits;
@@ -40,7 +41,7 @@ app.UseSwaggerUI();
 app.UseAuthentication();
 app.UseAuthorization();
 
-app.MapGet("/health", () => TypedResults.Ok(new HealthStatus("ok"))).AllowAnonymous().WithTags("Health");
+app.MapHealth();
 app.MapHouseholds();
 app.MapKits();
 app.MapLabResults();
@@ -54,5 +55,3 @@ await app.RunAsync();
 return 0;
 
 public partial class Program;
-
-public sealed record HealthStatus(string Status);
