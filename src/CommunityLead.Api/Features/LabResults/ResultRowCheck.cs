@@ -56,6 +56,11 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
             Problem("acidifiedAt", "The sample cannot be acidified before it was collected.");
         if (acidifiedAt is { } preserved && analyzedAt is { } run && preserved > run)
             Problem("acidifiedAt", "The sample cannot be acidified after the batch was analyzed.");
+        else if (acidifiedAt is { } acid && analyzedAt is { } analysis && analysis - acid < holding.WaitAfterAcidification)
+            // Refused rather than flagged: a figure read too soon can be low, and a low figure would tell a
+            // household its water is fine. The lab can wait and analyse the same bottle again.
+            Problem("acidifiedAt", $"The batch was analyzed {(int)(analysis - acid).TotalHours} h {(analysis - acid).Minutes} min after acid was added; wait at least " +
+                $"{holding.WaitAfterAcidification.TotalHours:0.#} h so lead on particles dissolves, then analyze this bottle again.");
         if (analyzedAt is { } analyzed && sample is not null && analyzed < sample.CollectedAt)
             Problem("analyzedAt", $"The batch's analysis time is before kit {kit.Code}'s sample was collected.");
         // Without a valid analysis time (reported once, for the batch) holding times cannot be judged.

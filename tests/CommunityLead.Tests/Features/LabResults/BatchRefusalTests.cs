@@ -26,6 +26,8 @@ public class BatchRefusalTests
     [InlineData("analysis time without offset", "analyzedAt", "UTC offset")]
     [InlineData("acid time without offset", "/results/0/acidifiedAt", "UTC offset")]
     [InlineData("acidified after analysis", "/results/0/acidifiedAt", "after the batch was analyzed")]
+    // At least 16 h between acid and analysis [from memory: EPA Methods 200.7/200.8 §8.3]; 19:30Z − 03:45Z = 15 h 45 min.
+    [InlineData("analyzed too soon after acid", "/results/0/acidifiedAt", "analyzed 15 h 45 min after acid was added; wait at least 16 h")]
     [InlineData("unknown QC type", "/qc/0/type", "calibration-check")]
     public async Task JsonBatch_OneBadRow_422NamingItAndNothingWritten(string problem, string key, string reason)
     {
@@ -56,6 +58,7 @@ public class BatchRefusalTests
             case "analysis time without offset": batch["analyzedAt"] = "2026-04-08T14:30:00"; break;
             case "acid time without offset": first["acidifiedAt"] = "2026-04-03T09:00:00"; break;
             case "acidified after analysis": first["acidifiedAt"] = "2026-04-09T09:00:00+00:00"; break;
+            case "analyzed too soon after acid": first["acidifiedAt"] = "2026-04-08T03:45:00+00:00"; break;
             case "unknown QC type": batch["qc"]![0]!["type"] = "spike"; break;
         }
         var before = FootprintOf(app);
@@ -67,6 +70,19 @@ public class BatchRefusalTests
         Assert.Contains(reason, refused["errors"]![key]![0]!.GetValue<string>(), StringComparison.OrdinalIgnoreCase);
         Assert.Equal(before, FootprintOf(app));
         Assert.Equal("received", await KitStateAsync(coordinator, kit));
+    }
+
+    [Fact]
+    public async Task JsonBatch_AnalyzedExactly16HoursAfterAcid_IsAccepted()
+    {
+        // The wait is "at least 16 h" [from memory: EPA Methods 200.7/200.8 §8.3]: exactly 16 h is enough.
+        using var app = new CommunityLeadFactory();
+        var (coordinator, lab) = (app.CreateClient(Roles.Coordinator), app.CreateClient(Roles.Lab));
+        var kit = await ReceivedKitAsync(coordinator, lab);
+        var batch = Batch("WAIT-16", BothBottles(kit));
+        batch["results"]![0]!["acidifiedAt"] = "2026-04-08T03:30:00+00:00"; // analysis at 19:30Z
+
+        await PostBatchAsync(lab, batch, HttpStatusCode.Created);
     }
 
     [Fact]
