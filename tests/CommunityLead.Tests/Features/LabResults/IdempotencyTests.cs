@@ -149,4 +149,32 @@ public class IdempotencyTests
         Assert.Equal(before, FootprintOf(app));
         Assert.Equal("received", await KitStateAsync(coordinator, kit));
     }
+
+    [Fact]
+    public async Task Batch_CorrectionLeavingOutARow_422NamingEachRowAndNothingWritten()
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var (kept, leftOut) = (await ReceivedKitAsync(coordinator, lab), await ReceivedKitAsync(coordinator, lab));
+        await PostBatchAsync(lab, Batch("CORR-3", [.. BothBottles(kept), .. BothBottles(leftOut)]), HttpStatusCode.Created);
+        var before = FootprintOf(app);
+        // The lab corrects one kit and leaves the other kit's two rows out, as if that were a withdrawal.
+        var correction = Batch("CORR-3", BothBottles(kept, firstDraw: 14.2));
+        (correction["correction"], correction["correctionReason"]) = (true, "Re-ran the first draw after a dilution error.");
+
+        var refused = await PostBatchAsync(lab, correction, HttpStatusCode.UnprocessableEntity);
+
+        Assert.Equal(new HashSet<string> { "results" }, ProblemKeys(refused));
+        var reasons = refused["errors"]!["results"]!.AsArray().Select(r => r!.GetValue<string>()).ToList();
+        Assert.Equal(2, reasons.Count);
+        Assert.Contains(reasons, r => r.Contains($"lead for kit {leftOut}, first-draw", StringComparison.Ordinal));
+        Assert.Contains(reasons, r => r.Contains($"lead for kit {leftOut}, flushed", StringComparison.Ordinal));
+        Assert.Equal(before, FootprintOf(app));
+
+        // Restating the untouched rows makes it a correction like any other.
+        var whole = Batch("CORR-3", [.. BothBottles(kept, firstDraw: 14.2), .. BothBottles(leftOut)]);
+        (whole["correction"], whole["correctionReason"]) = (true, "Re-ran the first draw after a dilution error.");
+        await PostBatchAsync(lab, whole, HttpStatusCode.Created);
+    }
 }
