@@ -14,7 +14,8 @@ namespace CommunityLead.Api.Features.LabResults;
 /// <summary>
 /// What happens when a batch's results come into effect (accepted at intake, or released later): earlier
 /// results for the same bottle and analyte are superseded, kits whose every bottle now has a lead result
-/// move to analyzed, and a kit whose letter already went out goes on the attention list.
+/// move to analyzed, and a kit whose letter already went out goes on the attention list. Kits that can no
+/// longer take results (cancelled, replaced, closed, lost) keep their state.
 /// Runs inside the caller's unit of work; nothing is saved here.
 /// </summary>
 public static class BatchEffects
@@ -56,6 +57,17 @@ public static class BatchEffects
         var analyzed = new List<int>();
         foreach (var kit in kits)
         {
+            // A held batch released days later may find a kit replaced, cancelled or closed meanwhile. Its
+            // results are kept on record (the batch view flags them) but move nothing, and the rest of the
+            // batch still comes into effect; at intake the checker refuses such kits outright.
+            if (!KitLifecycle.TryMove(kit.State, KitAction.RecordResults, out _))
+            {
+                // A closed kit's household already has its letter: new figures for it need a person to look.
+                if (kit.State == KitState.Closed && changedKits.Contains(kit.Id))
+                    db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, AttentionFlag.CorrectedAfterLetter,
+                        $"Results released for closed kit {kit.Code} differ from its letter (batch {batch.BatchId} version {batch.Version}); the kit stays closed.", nowUtc));
+                continue;
+            }
             var lead = covered[kit.Id].ToHashSet();
             if (!changedKits.Contains(kit.Id) || !bottles[kit.Id].All(lead.Contains)) continue;
             var letterWentOut = kit.State == KitState.LetterSent;

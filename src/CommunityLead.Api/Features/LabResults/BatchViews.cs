@@ -2,6 +2,7 @@ using System.Text.Json;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Rules.Kits;
 using CommunityLead.Rules.LabResults;
 using Microsoft.EntityFrameworkCore;
 
@@ -18,6 +19,14 @@ public static class BatchViews
             .ToListAsync(ct);
         var flags = flagged.SelectMany(r => Holding(r.HoldingFlags, json).Select(f => new ResultFlag(
             r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, KebabEnum.Name(f.Code), f.Message))).ToList();
+        // Results for a kit that never took any and never will (a held batch released after the kit was
+        // replaced, say). Closed kits are not flagged: their earlier results did count.
+        var stopped = (await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == batch.Id)
+                .Join(db.Kits, r => r.KitId, k => k.Id, (r, k) => new { r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, k.State })
+                .ToListAsync(ct))
+            .Where(r => r.State is KitState.Cancelled or KitState.Rejected or KitState.Lost);
+        flags.AddRange(stopped.Select(r => new ResultFlag(r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, "kit-not-open",
+            $"Kit {r.KitCode} is {KebabEnum.Name(r.State)}: this result is kept on record but changes nothing for the kit.")));
         return new BatchOutcome(batch.BatchId, batch.Version, batch.Status, batch.Method, batch.AnalyzedAt, batch.ResultCount,
             JsonSerializer.Deserialize<QcVerdict>(batch.QcJson, json)!, flags, batch.CorrectionReason, batch.PostedAtUtc,
             batch.PostedBy, batch.ReleasedAtUtc is { } at ? new BatchRelease(at, batch.ReleasedBy!, batch.ReleaseReason!) : null);

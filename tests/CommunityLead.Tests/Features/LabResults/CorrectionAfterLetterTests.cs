@@ -46,6 +46,32 @@ public class CorrectionAfterLetterTests
         await Expect(await lab.GetAsync("/api/attention"), HttpStatusCode.Forbidden);
     }
 
+    [Fact]
+    public async Task HeldResults_ReleasedAfterTheKitWasClosed_KitStaysClosedAndGoesOnTheAttentionList()
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var kit = await ReceivedKitAsync(coordinator, lab);
+        await PostBatchAsync(lab, Batch("FIRST-1", BothBottles(kit, firstDraw: 4.2)), HttpStatusCode.Created);
+        app.WithDb(db =>
+        {
+            foreach (var k in db.Kits.Where(k => k.Code == kit)) k.State = KitState.LetterSent;
+            return db.SaveChanges();
+        });
+        // A re-run comes back with other figures but fails QC and waits; meanwhile the kit is closed.
+        await PostBatchAsync(lab, Batch("RERUN-1", BothBottles(kit, firstDraw: 18.0),
+            [Qc("calibration-blank", measured: 0.04), Qc("calibration-check", measured: 8.0, expected: 10.0)]), HttpStatusCode.Created);
+        await PostAsync(coordinator, $"/api/kits/{kit}/close", null, HttpStatusCode.OK);
+
+        await PostAsync(coordinator, "/api/lab/batches/RERUN-1/release", new { reason = "Lab showed the check was mis-keyed." }, HttpStatusCode.OK);
+
+        Assert.Equal("closed", await KitStateAsync(coordinator, kit));
+        var item = Assert.Single(await CorrectedAfterLetterAsync(coordinator));
+        Assert.Equal(kit, item["kitCode"]!.GetValue<string>());
+        Assert.Contains("stays closed", item["detail"]!.GetValue<string>(), StringComparison.Ordinal);
+    }
+
     private static async Task<List<JsonObject>> CorrectedAfterLetterAsync(HttpClient coordinator) =>
         [.. (await GetArrayAsync(coordinator, "/api/attention")).Select(a => a!.AsObject())
             .Where(a => a["reason"]!.GetValue<string>() == "corrected-after-letter")];

@@ -96,6 +96,28 @@ public class ReleaseTests
     }
 
     /// <summary>A received kit with both bottles in batch HELD-1, whose only calibration check recovered 80%.</summary>
+    [Fact]
+    public async Task HeldBatch_OneKitReplacedMeanwhile_ReleaseStillGoesThroughAndFlagsThatKit()
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var (replaced, other) = (await ReceivedKitAsync(coordinator, lab), await ReceivedKitAsync(coordinator, lab));
+        await PostBatchAsync(lab, Batch("HELD-1", [.. BothBottles(replaced), .. BothBottles(other)],
+            [Qc("calibration-blank", measured: 0.04), Qc("calibration-check", measured: 8.0, expected: 10.0)]), HttpStatusCode.Created);
+        // While the batch waits, the coordinator sends one household a new kit: the old one is cancelled.
+        await PostAsync(coordinator, $"/api/kits/{replaced}/replacement", new { reason = "Results held; sending a fresh kit." }, HttpStatusCode.Created);
+
+        var released = await PostAsync(coordinator, Path, new { reason = "Lab showed the check was mis-keyed; the run was in control." },
+            HttpStatusCode.OK);
+
+        await AssertAnalyzedAsync(coordinator, other);
+        Assert.Equal("cancelled", await KitStateAsync(coordinator, replaced));
+        var flagged = released["flags"]!.AsArray().Where(f => f!["code"]!.GetValue<string>() == "kit-not-open").ToList();
+        Assert.Equal(2, flagged.Count);
+        Assert.All(flagged, f => Assert.Equal(replaced, f!["kitCode"]!.GetValue<string>()));
+    }
+
     private static async Task<(HttpClient Coordinator, HttpClient Lab, string Kit)> HeldBatchAsync(CommunityLeadFactory app)
     {
         var coordinator = app.CreateClient(Roles.Coordinator);
