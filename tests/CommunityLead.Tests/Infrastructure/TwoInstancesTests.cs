@@ -95,4 +95,39 @@ public class TwoInstancesTests
         Assert.False(interpretation["provisional"]!.GetValue<bool>());
         Assert.Equal(2, interpretation["findings"]!.AsArray().Count);
     }
+
+    [Fact]
+    public async Task TwoInstances_BatchesForDifferentBottlesOfOneKitAtOnce_KitAlwaysEndsAnalyzed()
+    {
+        // Each batch alone covers one bottle; only together do they make the kit analyzed. Posted at the same
+        // moment, neither may miss the other's rows for good: one may lose the race (409) and is posted again.
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var flow = new ResultsFlow(a);
+        var kits = new List<string>();
+        for (var i = 0; i < 8; i++) kits.Add(await flow.ReceivedKitAsync());
+
+        await Task.WhenAll(kits.Select(async (code, i) =>
+        {
+            var posts = new[] { (a, "first-draw", 7.5), (b, "flushed", 2.5) }.Select(async bottle =>
+            {
+                var body = OneBottle($"SPLIT-{i}-{bottle.Item2}", code, bottle.Item2, bottle.Item3);
+                var lab = bottle.Item1.CreateClient(Roles.Lab);
+                var response = await lab.PostAsJsonAsync("/api/lab/batches", body);
+                if (response.StatusCode == HttpStatusCode.Conflict) response = await lab.PostAsJsonAsync("/api/lab/batches", body);
+                Assert.Contains(response.StatusCode, new[] { HttpStatusCode.Created, HttpStatusCode.OK });
+            });
+            await Task.WhenAll(posts);
+        }));
+
+        foreach (var code in kits)
+            Assert.NotEqual("received", (await GetAsync(flow.Coordinator, $"/api/kits/{code}"))["state"]!.GetValue<string>());
+    }
+
+    private static object OneBottle(string batchId, string code, string bottle, double value) => new
+    {
+        batchId, method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
+        results = new[] { new { kitCode = code, bottle, analyte = "lead", value, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 } },
+        qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = 10.1, unit = "ug/L" } },
+    };
 }

@@ -27,6 +27,10 @@ public static class BatchEffects
         Actor actor, DateTime nowUtc, CancellationToken ct)
     {
         var kitIds = results.Select(r => r.KitId).Distinct().ToList();
+        // The kits are read before their results and each gets a new version below, so two batches posted at
+        // once for different bottles of one kit cannot both miss each other's rows and leave the kit waiting:
+        // the second to save fails on the version (409, post again) and then sees the first one's rows.
+        var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);
         var earlier = await db.LabResults.Include(r => r.Batch)
             .Where(r => kitIds.Contains(r.KitId) && r.SupersededAtUtc == null && r.LabBatchId != batch.Id
                         && (r.Batch!.Status == BatchStatus.Accepted || r.Batch.Status == BatchStatus.Released))
@@ -51,12 +55,12 @@ public static class BatchEffects
                 .Select(x => new { x.KitId, x.Sample.Bottle, x.Sample.Position, x.Sample.Location })
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId, s => (s.Bottle, s.Position, s.Location));
-        var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);
         var resultsPerKit = results.CountBy(r => r.KitId).ToDictionary();
         kits = [.. kits.Where(k => resultsPerKit.ContainsKey(k.Id))];
         var analyzed = new List<int>();
         foreach (var kit in kits)
         {
+            kit.Version++;
             // A held batch released days later may find a kit replaced, cancelled or closed meanwhile. Its
             // results are kept on record (the batch view flags them) but move nothing, and the rest of the
             // batch still comes into effect; at intake the checker refuses such kits outright.
