@@ -41,8 +41,10 @@ public static class StorageSetup
     }
 
     /// <summary>
-    /// Applies pending migrations (creating a SQLite file's folder if needed). EF Core takes a database-wide
-    /// lock while migrating, so several instances starting at once against one PostgreSQL server is safe.
+    /// Applies pending migrations (creating a SQLite file's folder if needed). Several instances may start at
+    /// once: on SQLite EF Core's own migration lock serialises them; on PostgreSQL a session advisory lock is held
+    /// around the whole run, because EF Core's lock there was seen to let a second instance apply a migration the
+    /// first had just applied ("relation … already exists").
     /// </summary>
     public static async Task MigrateAsync(IServiceProvider services)
     {
@@ -53,29 +55,28 @@ public static class StorageSetup
             var file = new SqliteConnectionStringBuilder(db.Database.GetConnectionString()).DataSource;
             var folder = Path.GetDirectoryName(Path.GetFullPath(file));
             if (!string.IsNullOrEmpty(folder)) Directory.CreateDirectory(folder);
+            await db.Database.MigrateAsync();
+            return;
         }
-        else
-        {
-            await CreateHistoryTableAsync(db);
-        }
-        await db.Database.MigrateAsync();
-    }
-
-    /// <summary>
-    /// On an empty PostgreSQL database EF Core reads the migrations history before creating it and logs the
-    /// failed read as an error ("fail: … __EFMigrationsHistory"), which looks like a broken first start.
-    /// Creating the table first avoids that. Two instances may race to create it: the loser's error is harmless.
-    /// </summary>
-    private static async Task CreateHistoryTableAsync(CommunityLeadDb db)
-    {
-        var history = db.GetService<IHistoryRepository>();
-        if (await history.ExistsAsync()) return;
+        await using var lockConnection = new NpgsqlConnection(db.Database.GetConnectionString());
+        await lockConnection.OpenAsync();
+        await using (var take = new NpgsqlCommand($"SELECT pg_advisory_lock({MigrationLockKey})", lockConnection))
+            await take.ExecuteNonQueryAsync();
         try
         {
+            // Created first, so EF Core's own existence check never reads a missing table (it would log a
+            // failed query as an error on every first start).
+            var history = db.GetService<IHistoryRepository>();
             await db.Database.ExecuteSqlRawAsync(history.GetCreateIfNotExistsScript());
+            await db.Database.MigrateAsync();
         }
-        catch (PostgresException e) when (e.SqlState is PostgresErrorCodes.UniqueViolation or PostgresErrorCodes.DuplicateTable)
+        finally
         {
+            await using var release = new NpgsqlCommand($"SELECT pg_advisory_unlock({MigrationLockKey})", lockConnection);
+            await release.ExecuteNonQueryAsync();
         }
     }
+
+    /// <summary>Any fixed number: it only has to be the same in every instance of this service.</summary>
+    private const long MigrationLockKey = 0x434C_4D49_4752_4154; // "CLMIGRAT"
 }

@@ -5,6 +5,7 @@ using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Data.Sqlite;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.DependencyInjection.Extensions;
+using Microsoft.Extensions.Logging;
 
 namespace CommunityLead.Tests.Infrastructure;
 
@@ -31,6 +32,9 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
     }
 
     public TestClock Clock { get; }
+
+    /// <summary>Every error the service logged, for tests that assert a start or a request was clean.</summary>
+    public ErrorLog Errors { get; } = new();
     public string DatabaseFile => Path.Combine(folder, "test.db");
     public string ConnectionString { get; }
 
@@ -40,6 +44,7 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
         builder.UseEnvironment("Testing");
         builder.UseSetting("ConnectionStrings:CommunityLead", ConnectionString);
         builder.UseSetting("Database:Provider", TestStore.IsPostgres ? "Postgres" : "Sqlite");
+        builder.ConfigureLogging(logging => logging.AddProvider(Errors));
         builder.ConfigureServices(services =>
         {
             services.RemoveAll<TimeProvider>();
@@ -85,4 +90,26 @@ public sealed class TestClock(DateTimeOffset now) : TimeProvider
 {
     public DateTimeOffset Now { get; set; } = now;
     public override DateTimeOffset GetUtcNow() => Now.ToUniversalTime();
+}
+
+/// <summary>Keeps the messages of log entries at Error or above.</summary>
+public sealed class ErrorLog : ILoggerProvider
+{
+    private readonly System.Collections.Concurrent.ConcurrentQueue<string> entries = new();
+
+    public IReadOnlyList<string> Entries => [.. entries];
+
+    public ILogger CreateLogger(string categoryName) => new Logger(categoryName, entries);
+
+    public void Dispose() { }
+
+    private sealed class Logger(string category, System.Collections.Concurrent.ConcurrentQueue<string> entries) : ILogger
+    {
+        public IDisposable? BeginScope<TState>(TState state) where TState : notnull => null;
+        public bool IsEnabled(LogLevel logLevel) => logLevel >= LogLevel.Error;
+        public void Log<TState>(LogLevel logLevel, EventId eventId, TState state, Exception? exception, Func<TState, Exception?, string> formatter)
+        {
+            if (IsEnabled(logLevel)) entries.Enqueue($"{category}: {formatter(state, exception)}");
+        }
+    }
 }

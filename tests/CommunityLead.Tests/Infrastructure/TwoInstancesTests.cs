@@ -28,6 +28,9 @@ public class TwoInstancesTests
         Assert.Equal(a.WithDb(db => db.Database.GetMigrations().ToList()), applied);
         await IssueKitAsync(b.CreateClient(Roles.Coordinator));
         Assert.Equal(1, a.WithDb(db => db.Kits.Count()));
+        // A first start is clean: no failed query logged as an error by either instance.
+        Assert.Empty(a.Errors.Entries);
+        Assert.Empty(b.Errors.Entries);
     }
 
     [Fact]
@@ -130,4 +133,57 @@ public class TwoInstancesTests
         results = new[] { new { kitCode = code, bottle, analyte = "lead", value, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 } },
         qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = 10.1, unit = "ug/L" } },
     };
+
+    [Fact]
+    public async Task TwoInstances_HeldBatchReleasedByTwoCoordinatorsAtOnce_OneReleaseOnRecord()
+    {
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var flow = new ResultsFlow(a);
+        var held = await flow.PostLeadAsync(await flow.ReceivedKitAsync(), firstDraw: 12, flushed: 3, calibration: 7.5);
+        var path = $"/api/lab/batches/{held["batchId"]}/release";
+
+        var releases = new[] { a, b, a, b }.Select((app, i) =>
+            app.CreateClient(Roles.Coordinator).PostAsJsonAsync(path, new { reason = $"The lab explained the check ({i})." }));
+        var statuses = (await Task.WhenAll(releases)).Select(r => r.StatusCode).ToList();
+
+        Assert.Equal(1, statuses.Count(s => s == HttpStatusCode.OK));
+        Assert.All(statuses.Where(s => s != HttpStatusCode.OK), s => Assert.Equal(HttpStatusCode.Conflict, s));
+        Assert.Equal(1, a.WithDb(db => db.AuditTrail.Count(e => e.Action == "release")));
+    }
+
+    [Fact]
+    public async Task TwoInstances_AttentionItemResolvedTwiceAtOnce_OneNoteWins()
+    {
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var flow = new ResultsFlow(a);
+        await flow.PostLeadAsync(await flow.ReceivedKitAsync(), firstDraw: 80, flushed: 20);
+        var id = a.WithDb(db => db.Attention.Select(x => x.Id).First());
+
+        var resolves = new[] { a, b, a, b }.Select((app, i) =>
+            app.CreateClient(Roles.Coordinator).PostAsJsonAsync($"/api/attention/{id}/resolve", new { note = $"Called the household ({i})." }));
+        var statuses = (await Task.WhenAll(resolves)).Select(r => r.StatusCode).ToList();
+
+        Assert.Equal(1, statuses.Count(s => s == HttpStatusCode.NoContent));
+        Assert.All(statuses.Where(s => s != HttpStatusCode.NoContent), s => Assert.Equal(HttpStatusCode.Conflict, s));
+        Assert.Equal(1, a.WithDb(db => db.AuditTrail.Count(e => e.Action == "resolve-attention")));
+    }
+
+    [Fact]
+    public async Task TwoInstances_SameLetterRenderedAtOnce_RecordedOnce()
+    {
+        using var a = new CommunityLeadFactory();
+        using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
+        var flow = new ResultsFlow(a);
+        var code = await flow.ReceivedKitAsync();
+        await flow.PostLeadAsync(code, firstDraw: 4, flushed: 1.5);
+
+        var renders = new[] { a, b, a, b, a, b }.Select(app => app.CreateClient(Roles.Coordinator).GetAsync($"/api/kits/{code}/letter"));
+        var responses = await Task.WhenAll(renders);
+
+        Assert.All(responses, r => Assert.Equal(HttpStatusCode.OK, r.StatusCode));
+        Assert.Single(responses.Select(r => r.Headers.GetValues("X-Letter-Id").Single()).Distinct());
+        Assert.Equal(1, a.WithDb(db => db.Letters.Count()));
+    }
 }

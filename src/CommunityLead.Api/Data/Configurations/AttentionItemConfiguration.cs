@@ -12,6 +12,8 @@ public class AttentionItemConfiguration : IEntityTypeConfiguration<AttentionItem
         b.Property(a => a.Detail).HasMaxLength(AttentionItem.DetailMaxLength);
         b.Property(a => a.ResolvedBy).HasMaxLength(100);
         b.Property(a => a.ResolutionNote).HasMaxLength(500);
+        // Resolving saves only if nobody resolved it meanwhile, so one note (and one audit entry) wins.
+        b.Property(a => a.ResolvedAtUtc).IsConcurrencyToken();
         b.HasIndex(a => new { a.ResolvedAtUtc, a.Priority, a.RaisedAtUtc });
         b.HasOne<Kit>().WithMany().HasForeignKey(a => a.KitId).OnDelete(DeleteBehavior.Restrict);
     }

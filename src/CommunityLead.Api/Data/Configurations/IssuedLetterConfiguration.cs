@@ -16,6 +16,8 @@ public class IssuedLetterConfiguration : IEntityTypeConfiguration<IssuedLetter>
         b.Property(l => l.SentBy).HasMaxLength(100);
         b.HasIndex(l => new { l.KitId, l.IssuedAtUtc });
         b.HasIndex(l => l.SentAtUtc);
+        // One record per distinct letter: two requests rendering it at once must not both record it.
+        b.HasIndex(l => new { l.KitId, l.InterpretationId, l.Sha256 }).IsUnique();
         b.HasOne<Kit>().WithMany().HasForeignKey(l => l.KitId).OnDelete(DeleteBehavior.Restrict);
         b.HasOne<KitInterpretation>().WithMany().HasForeignKey(l => l.InterpretationId).OnDelete(DeleteBehavior.Restrict);
     }

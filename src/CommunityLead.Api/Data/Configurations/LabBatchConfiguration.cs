@@ -11,6 +11,8 @@ public class LabBatchConfiguration : IEntityTypeConfiguration<LabBatch>
         b.Property(x => x.BatchId).HasMaxLength(64);
         b.HasIndex(x => new { x.BatchId, x.Version }).IsUnique();
         b.HasIndex(x => x.Status);
+        // Releasing saves only if the batch is still held: two coordinators releasing at once get one 200, one 409.
+        b.Property(x => x.Status).IsConcurrencyToken();
         b.Property(x => x.CorrectionReason).HasMaxLength(500);
         b.Property(x => x.Method).HasMaxLength(100);
         b.Property(x => x.ContentHash).HasMaxLength(64);

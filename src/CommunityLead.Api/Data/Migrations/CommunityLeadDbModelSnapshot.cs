@@ -99,6 +99,7 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasColumnType("TEXT");
 
                     b.Property<DateTime?>("ResolvedAtUtc")
+                        .IsConcurrencyToken()
                         .HasColumnType("TEXT");
 
                     b.Property<string>("ResolvedBy")
@@ -373,6 +374,9 @@ namespace CommunityLead.Api.Data.Migrations
 
                     b.HasIndex("KitId", "IssuedAtUtc");
 
+                    b.HasIndex("KitId", "InterpretationId", "Sha256")
+                        .IsUnique();
+
                     b.ToTable("Letters");
                 });
 
@@ -605,6 +609,7 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasColumnType("INTEGER");
 
                     b.Property<string>("Status")
+                        .IsConcurrencyToken()
                         .IsRequired()
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");

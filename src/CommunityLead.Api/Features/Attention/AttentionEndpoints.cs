@@ -46,7 +46,14 @@ public static class AttentionEndpoints
         item.ResolutionNote = request.Note!.Trim();
         db.AuditTrail.Add(Audit.Kit(actor, item.ResolvedAtUtc.Value, item.KitCode, "resolve-attention",
             reason: item.ResolutionNote, detail: KebabEnum.Name(item.Reason)));
-        await db.SaveChangesAsync(ct);
+        try
+        {
+            await db.SaveChangesAsync(ct);
+        }
+        catch (DbUpdateConcurrencyException)
+        {
+            return TypedResults.Problem(statusCode: 409, title: "Already resolved.", detail: "Someone resolved this item a moment ago.");
+        }
         return TypedResults.NoContent();
     }
 }

@@ -28,6 +28,21 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
     /// <summary>Letters for the given kits; kits without a stored interpretation are skipped.</summary>
     public async Task<List<RenderedLetter>> IssueAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
     {
+        try
+        {
+            return await IssueOnceAsync(kitIds, language, actor, ct);
+        }
+        catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
+        {
+            // Another request (or instance) recorded the same letter a moment ago: the unique index kept one
+            // record; issuing again finds and returns it.
+            db.ChangeTracker.Clear();
+            return await IssueOnceAsync(kitIds, language, actor, ct);
+        }
+    }
+
+    private async Task<List<RenderedLetter>> IssueOnceAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
+    {
         var kits = await db.Kits.AsNoTracking().Where(k => kitIds.Contains(k.Id))
             .Select(k => new { k.Id, k.Code, k.Household }).ToListAsync(ct);
         var interpretations = await db.Interpretations.AsNoTracking()

@@ -108,6 +108,7 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasColumnType("character varying(500)");
 
                     b.Property<DateTime?>("ResolvedAtUtc")
+                        .IsConcurrencyToken()
                         .HasColumnType("timestamp with time zone");
 
                     b.Property<string>("ResolvedBy")
@@ -390,6 +391,9 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
 
                     b.HasIndex("KitId", "IssuedAtUtc");
 
+                    b.HasIndex("KitId", "InterpretationId", "Sha256")
+                        .IsUnique();
+
                     b.ToTable("Letters");
                 });
 
@@ -633,6 +637,7 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasColumnType("integer");
 
                     b.Property<string>("Status")
+                        .IsConcurrencyToken()
                         .IsRequired()
                         .HasMaxLength(40)
                         .HasColumnType("character varying(40)");
