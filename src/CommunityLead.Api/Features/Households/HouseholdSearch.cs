@@ -21,12 +21,15 @@ public static class HouseholdSearch
         if (!string.IsNullOrWhiteSpace(areaCode)) query = query.Where(h => h.AreaCode == areaCode.Trim().ToLowerInvariant());
         if (!string.IsNullOrWhiteSpace(search))
         {
-            // Matched literally and without regard to case, the same on SQLite and PostgreSQL (LIKE differs:
-            // SQLite's ignores case, PostgreSQL's does not). % and _ mean themselves.
-            var term = search.Trim().ToLowerInvariant();
-            query = query.Where(h => h.Name.ToLower().Contains(term) || h.Phone!.ToLower().Contains(term)
-                || h.Email!.ToLower().Contains(term) || h.Address.Line1.ToLower().Contains(term)
-                || h.Address.PostalCode.ToLower().Contains(term));
+            // Matched literally (% and _ mean themselves), the same way on both stores. Case is ignored through
+            // lower(), which on SQLite folds only A–Z: "ángela" finds "Ángela" on PostgreSQL but not on SQLite, so
+            // the text exactly as typed is tried as well, and "Ángela" finds "Ángela" everywhere.
+            var typed = search.Trim();
+            var folded = typed.ToLowerInvariant();
+            query = query.Where(h => h.Name.Contains(typed) || h.Name.ToLower().Contains(folded)
+                || h.Phone!.Contains(typed) || h.Email!.ToLower().Contains(folded)
+                || h.Address.Line1.Contains(typed) || h.Address.Line1.ToLower().Contains(folded)
+                || h.Address.PostalCode.ToLower().Contains(folded));
         }
         var total = await query.CountAsync(ct);
         var items = await query.OrderBy(h => h.Name).ThenBy(h => h.Id).Skip((page - 1) * pageSize).Take(pageSize)

@@ -26,4 +26,22 @@ public class HouseholdSearchTests
         Assert.Equal(2, (await GetAsync(coordinator, "/api/households"))["total"]!.GetValue<int>());
         await GetAsync(coordinator, "/api/households?pageSize=500", HttpStatusCode.BadRequest);
     }
+
+    [Theory]
+    [InlineData("Ángela")]
+    [InlineData("Núñez")]
+    [InlineData("Peñón")]
+    [InlineData("NGELA")] // case ignored for A–Z on both stores; SQLite's lower() leaves "Á" as it is
+    public async Task Search_AccentedNameAsWritten_FoundOnEitherStore(string term)
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        await SignUpAsync(coordinator, h => { h["name"] = "Ángela Núñez"; h["address"]!["line1"] = "9 Calle Peñón"; });
+        await SignUpAsync(coordinator, h => h["name"] = "Angus Nye");
+
+        var found = await GetAsync(coordinator, $"/api/households?search={Uri.EscapeDataString(term)}");
+
+        Assert.Equal(1, found["total"]!.GetValue<int>());
+        Assert.Equal("Ángela Núñez", found["items"]![0]!["name"]!.GetValue<string>());
+    }
 }
