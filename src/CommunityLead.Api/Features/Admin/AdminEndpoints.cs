@@ -31,7 +31,12 @@ public static class AdminEndpoints
         TypedResults.Ok(await db.ApiKeys.AsNoTracking().OrderBy(k => k.Id)
             .Select(k => new KeyListing(k.Label, k.Role, k.CreatedAtUtc, k.RevokedAtUtc)).ToListAsync(ct));
 
-    /// <summary>Keyset paging on the entry id: stable while new entries keep arriving.</summary>
+    /// <summary>
+    /// Keyset paging on the entry id: pages never shift while new entries arrive. Ids are handed out when an entry
+    /// is written and become visible when its transaction commits, so with several writers (PostgreSQL, several
+    /// instances) an entry can appear behind a cursor already passed; a reader following new entries re-reads a
+    /// window before its cursor (README, Make a key).
+    /// </summary>
     public static async Task<Results<Ok<AuditPage>, ValidationProblem>> ReadAudit(
         CommunityLeadDb db, CancellationToken ct, string? subject = null, long after = 0, int pageSize = 100)
     {
