@@ -1,6 +1,7 @@
 using System.Data.Common;
 using System.Text.RegularExpressions;
 using CommunityLead.Api.Features.LabResults;
+using YamlDotNet.RepresentationModel;
 
 namespace CommunityLead.Tests.Deploy;
 
@@ -79,6 +80,43 @@ public class ComposeFileTests
         var limit = Regex.Match(config, @"client_max_body_size\s+(\d+)m\s*;");
         Assert.True(limit.Success, "client_max_body_size in megabytes");
         Assert.True(long.Parse(limit.Groups[1].Value) * 1024 * 1024 > new LabIntakeOptions().MaxBatchBytes);
+    }
+
+    [Fact]
+    public void Compose_PostgresProfile_InstancesPoolsFitTheServersConnectionLimit()
+    {
+        // PostgreSQL's max_connections: its default, unless db's command sets it.
+        var command = Yaml.Child(Db.Node, "command") is YamlSequenceNode list
+            ? string.Join(' ', list.Children.Select(Yaml.Text))
+            : Yaml.Text(Yaml.Child(Db.Node, "command")) ?? "";
+        var setting = Regex.Match(command, @"max_connections=(\d+)");
+        var maxConnections = setting.Success ? int.Parse(setting.Groups[1].Value) : 100;
+        const int SuperuserReserved = 3;  // superuser_reserved_connections' default
+        const int ForCommands = 10;       // `run --rm` commands (migrate, keys) and pg_dump beside the instances
+
+        // Npgsql's own default pool (100 per instance) would not fit: every instance names its size.
+        var pools = Instances.Select(instance =>
+        {
+            var connection = new DbConnectionStringBuilder { ConnectionString = instance.Environment["ConnectionStrings__CommunityLead"] };
+            Assert.True(connection.TryGetValue("Maximum Pool Size", out var size), $"{instance.Name}: no Maximum Pool Size");
+            return int.Parse((string)size);
+        }).ToList();
+        Assert.True(pools.Sum() + SuperuserReserved + ForCommands <= maxConnections,
+            $"pools of {string.Join(" + ", pools)} connections do not fit max_connections={maxConnections}");
+    }
+
+    [Fact]
+    public void Compose_Balancer_PassesFailedAndUnhealthyAnswersToTheOtherInstanceButNeverRepeatsAPost()
+    {
+        var (source, _) = Assert.Single(Balancer.Volumes);
+        var config = File.ReadAllText(RepoFiles.PathOf(source));
+        var nextUpstream = Regex.Match(config, @"^\s*proxy_next_upstream\s+([^;]+);", RegexOptions.Multiline);
+        Assert.True(nextUpstream.Success, "proxy_next_upstream");
+        var cases = nextUpstream.Groups[1].Value.Split(' ', StringSplitOptions.RemoveEmptyEntries);
+        // 503: what GET /health answers when the instance cannot reach its database.
+        Assert.Superset(new HashSet<string> { "error", "timeout", "http_502", "http_503" }, cases.ToHashSet());
+        // A POST that reached one instance may have been stored: it must not be sent to the other as well.
+        Assert.DoesNotContain("non_idempotent", cases);
     }
 
     [Fact]

@@ -9,12 +9,14 @@ namespace CommunityLead.Tests.Infrastructure;
 /// Which database the integration tests run on. SQLite unless COMMUNITYLEAD_TEST_POSTGRES holds a connection
 /// string for a PostgreSQL role allowed to create databases; then every test gets a database of its own there,
 /// copied from a template migrated once per run (copying is much faster than migrating each time).
+/// Set but empty (a `$(.ci/postgres)` that failed) is an error, never a quiet fall-back to SQLite.
 /// </summary>
 public static class TestStore
 {
     public const string Variable = "COMMUNITYLEAD_TEST_POSTGRES";
 
-    private static readonly string? Server = Environment.GetEnvironmentVariable(Variable) is { Length: > 0 } s ? s : null;
+    // Every integration test reads IsPostgres first, so a throw here fails each of them with this message.
+    private static readonly string? Server = ServerFromEnvironment();
     private static readonly Lazy<string> Template = new(CreateTemplate);
 
     public static bool IsPostgres => Server is not null;
@@ -86,6 +88,18 @@ public static class TestStore
             try { Execute($"DROP DATABASE IF EXISTS \"{name}\""); } catch (NpgsqlException) { }
         };
         return name;
+    }
+
+    private static string? ServerFromEnvironment()
+    {
+        var value = Environment.GetEnvironmentVariable(Variable);
+        if (value is null) return null;
+        if (string.IsNullOrWhiteSpace(value))
+            throw new InvalidOperationException(
+                $"{Variable} is set but empty, so these tests would quietly run on SQLite instead of PostgreSQL. " +
+                $"The command that should have given the connection string probably failed (see what it wrote on stderr; " +
+                $".ci/postgres needs root to start its cluster). Set {Variable} to a connection string, or unset it to test on SQLite.");
+        return value;
     }
 
     private static string For(string database) =>
