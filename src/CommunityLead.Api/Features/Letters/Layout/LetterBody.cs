@@ -24,9 +24,13 @@ internal static class LetterBody
         foreach (var scale in content.Scales)
             blocks.AddRange(LeadScaleBlocks.Build(measure, fonts, scale, content.Language, x, width, spaceBefore: 12));
 
-        foreach (var section in new[] { content.Meaning, content.Steps, content.Cautions, content.WhoToCall })
+        foreach (var section in new[] { content.Meaning, content.Steps, content.Cautions })
             blocks.AddRange(Section(measure, fonts, section, x, width));
-        blocks.AddRange(ParagraphBlocks.Lines(measure, content.Closing, fonts.Body, Palette.Ink, x, width, SectionSpace));
+        // Who to call and the closing words (questions, "not medical advice") travel together: a last page holding
+        // only the closing lines reads like a stray sheet, and the caution belongs beside the numbers to call.
+        var ending = Section(measure, fonts, content.WhoToCall, x, width)
+            .Concat(ParagraphBlocks.Lines(measure, content.Closing, fonts.Body, Palette.Ink, x, width, SectionSpace)).ToList();
+        blocks.AddRange(ending.Select((line, i) => i < ending.Count - 1 ? line with { KeepWithNext = true } : line));
         return blocks;
     }
 

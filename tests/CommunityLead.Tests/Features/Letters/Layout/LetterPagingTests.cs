@@ -40,6 +40,33 @@ public class LetterPagingTests
         Assert.Contains("Page 2 of 2", letter.PageTexts[1]);
     }
 
+    [Theory]
+    [InlineData(PaperSize.Letter)]
+    [InlineData(PaperSize.A4)]
+    public void Render_AnyLengthThatSpills_ClosingWordsStayWithWhoToCall(PaperSize paper)
+    {
+        // The caution and the numbers to call are read together; a last page holding only the closing lines
+        // looks like a stray sheet. The one-page letter grows a sentence at a time until it has spilt for a while,
+        // so one of the lengths is the one where only the closing lines would fall onto page 2.
+        var content = LetterSamples.EnglishNotDetected(paper);
+        var spilt = 0;
+        for (var extra = 1; spilt < 6; extra++)
+        {
+            var longer = content with
+            {
+                Cautions = content.Cautions with
+                {
+                    Paragraphs = [.. content.Cautions.Paragraphs, .. Enumerable.Repeat("Keep the kit's paper with your records.", extra)],
+                },
+            };
+            var letter = RenderedLetter.Of(longer);
+            if (letter.PageTexts.Count == 1) continue;
+            spilt++;
+            Assert.Contains(content.WhoToCall.Heading, letter.PageTexts[^1]);
+            Assert.Contains("not medical advice", letter.PageTexts[^1]);
+        }
+    }
+
     [Fact]
     public void Render_ContentTooLongForTwoPages_GetsAThirdPageAndDropsNothing()
     {
