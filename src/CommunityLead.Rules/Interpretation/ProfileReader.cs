@@ -13,7 +13,7 @@ public static partial class ProfileReader
     /// <summary>Every interpretation and letter stores the id it was made with, in a column of this many characters.</summary>
     public const int IdMaxLength = 60;
 
-    private static readonly IReadOnlyList<string> Fields = ["id", "version", "name", "jurisdiction", "notes", "levels"];
+    private static readonly IReadOnlyList<string> Fields = ["id", "version", "name", "nameEs", "jurisdiction", "notes", "levels"];
 
     public static RuleProfile Read(string fileName, string json)
     {
@@ -27,6 +27,7 @@ public static partial class ProfileReader
         var version = profile.WholeNumber("version");
         if (version < 1) throw profile.Problem("version", $"must be 1 or more, not {version}");
         var name = profile.Text("name");
+        var spanishName = profile.OptionalText("nameEs");
         var jurisdiction = profile.Text("jurisdiction");
         var notes = profile.OptionalText("notes");
 
@@ -35,7 +36,7 @@ public static partial class ProfileReader
         var levels = entries.Select((entry, index) => ProfileLevelReader.Read(fileName, index, entry)).ToList();
         ProfileChecks.NoOverlaps(fileName, levels);
         ProfileChecks.LeadActionLevelAlways(fileName, levels);
-        return new RuleProfile(id, version, name, jurisdiction, levels, notes);
+        return new RuleProfile(id, version, name, jurisdiction, levels, notes, spanishName);
     }
 
     /// <summary>Reads every file; two files claiming the same id would make "profile X version N" ambiguous.</summary>

@@ -6,6 +6,7 @@ namespace CommunityLead.Rules.Interpretation;
 /// <summary>
 /// A jurisdiction's levels, as data (seed-data/profiles/*.json). Versioned: an interpretation records the
 /// profile id and version it used, so changing a profile later never rewrites what a household was told.
+/// <see cref="SpanishName"/> ("nameEs") names it in Spanish letters, which otherwise would print the English name.
 /// </summary>
 public sealed record RuleProfile(
     string Id,
@@ -13,7 +14,12 @@ public sealed record RuleProfile(
     string Name,
     string Jurisdiction,
     IReadOnlyList<ProfileLevel> Levels,
-    string? Notes = null);
+    string? Notes = null,
+    string? SpanishName = null)
+{
+    /// <summary>The name a letter in that language prints under its results table.</summary>
+    public string NameIn(bool spanish) => spanish && SpanishName is { } es ? es : Name;
+}
 
 public enum LevelKind
 {

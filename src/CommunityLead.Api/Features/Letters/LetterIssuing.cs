@@ -69,7 +69,7 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
             // The scales show every level only if the profile is still the version the interpretation used.
             var levels = profile is not null && profile.Version == stored.ProfileVersion
                 ? LetterLevels.For(profile, catalog.ProgramRules, collected) : null;
-            var content = LetterComposer.Compose(outcome, profile?.Name ?? stored.ProfileId,
+            var content = LetterComposer.Compose(outcome, profile?.NameIn(lang == LetterLanguage.Es) ?? stored.ProfileId,
                 new LetterRecipient(household.Name, household.Address.Line1, household.Address.Line2, household.Address.City,
                     household.Address.Region, household.Address.PostalCode),
                 lang, kind, kit.Code, collected, DateOnly.FromDateTime(now), household.WaterSource == WaterSource.PrivateWell,

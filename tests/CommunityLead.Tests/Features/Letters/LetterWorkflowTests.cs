@@ -58,8 +58,12 @@ public class LetterWorkflowTests
         Assert.Contains("plomo", spanish);
         Assert.Contains("consejo médico", spanish);
         Assert.DoesNotContain("not medical advice", spanish, StringComparison.OrdinalIgnoreCase);
+        // The levels' source is named in the letter's language (the us-lcri profile's "nameEs").
+        Assert.Contains("Mejoras a la Regla de Plomo y Cobre", spanish);
+        Assert.DoesNotContain("Lead and Copper Rule Improvements", spanish);
         var english = LetterPdfText.Read((await LetterAsync(flow.Coordinator, code, "en")).Pdf).Flat;
         Assert.Contains("not medical advice", english, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("Lead and Copper Rule Improvements", english);
         var bad = await flow.Coordinator.GetAsync($"/api/kits/{code}/letter?lang=fr");
         Assert.Equal(HttpStatusCode.BadRequest, bad.StatusCode);
     }

@@ -19,6 +19,19 @@ public class ProfileShippedTests
     }
 
     [Fact]
+    public void Shipped_EachProfile_HasASpanishName()
+    {
+        // Letters go out in English and Spanish; without "nameEs" a Spanish letter would print the English name.
+        Assert.All(ProfileReader.ReadAll(All()), p =>
+        {
+            Assert.False(string.IsNullOrWhiteSpace(p.SpanishName), p.Id);
+            Assert.NotEqual(p.Name, p.SpanishName);
+            Assert.Equal(p.SpanishName, p.NameIn(spanish: true));
+            Assert.Equal(p.Name, p.NameIn(spanish: false));
+        });
+    }
+
+    [Fact]
     public void Shipped_EachFile_IsNamedAfterItsIdAtVersion1()
     {
         foreach (var (fileName, json) in All())
