@@ -60,7 +60,8 @@ public static class StorageSetup
         }
         await using var lockConnection = new NpgsqlConnection(db.Database.GetConnectionString());
         await lockConnection.OpenAsync();
-        await using (var take = new NpgsqlCommand($"SELECT pg_advisory_lock({MigrationLockKey})", lockConnection))
+        // No timeout: another instance's migration may take longer than a command's default 30 s.
+        await using (var take = new NpgsqlCommand($"SELECT pg_advisory_lock({MigrationLockKey})", lockConnection) { CommandTimeout = 0 })
             await take.ExecuteNonQueryAsync();
         try
         {

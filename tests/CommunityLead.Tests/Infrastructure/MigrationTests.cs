@@ -1,5 +1,7 @@
 using CommunityLead.Api.Data;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Infrastructure;
+using Microsoft.EntityFrameworkCore.Migrations;
 
 namespace CommunityLead.Tests.Infrastructure;
 
@@ -18,5 +20,45 @@ public class MigrationTests
     {
         using var db = new PostgresDesignTimeFactory().CreateDbContext([]);
         Assert.False(db.Database.HasPendingModelChanges(), "Add a PostgreSQL migration (DEVELOPERS.md, Add a migration).");
+    }
+}
+
+/// <summary>Upgrading a database that already holds what a new constraint forbids.</summary>
+public class MigrationUpgradeTests
+{
+    [SqliteFact]
+    public void ConcurrencyGuards_OnADatabaseWithDuplicateLetters_KeepsTheSentOneAndBuildsTheIndex()
+    {
+        var folder = Directory.CreateTempSubdirectory("cl-upgrade").FullName;
+        try
+        {
+            var options = new DbContextOptionsBuilder<CommunityLeadDb>().UseSqlite($"Data Source={Path.Combine(folder, "old.db")}").Options;
+            using (var db = new CommunityLeadDb(options))
+            {
+                db.GetService<IMigrator>().Migrate("ReportPeriod");
+                // Two records of one letter, as a render race could leave them; only the second was confirmed sent.
+                // Foreign keys are off for this connection only, so no kit or interpretation is needed.
+                db.Database.OpenConnection();
+                db.Database.ExecuteSqlRaw("PRAGMA foreign_keys = OFF");
+                foreach (var sent in new string?[] { null, "2026-04-12 10:00:00" })
+                    db.Database.ExecuteSql($"""
+                        INSERT INTO "Letters" ("KitId", "KitCode", "InterpretationId", "ProfileId", "ProfileVersion", "Language", "Kind",
+                            "ContentJson", "Sha256", "Pages", "IssuedAtUtc", "IssuedBy", "CollectedOn", "SentAtUtc")
+                        VALUES (1, 'K', 1, 'us-lcri', 1, 'En', 'Results', '[]', 'abc', 1, '2026-04-10 10:00:00', 'x', '2026-04-03', {sent})
+                        """);
+                db.Database.CloseConnection();
+            }
+            using (var db = new CommunityLeadDb(options))
+            {
+                db.Database.Migrate();
+                var letter = Assert.Single(db.Letters.ToList());
+                Assert.NotNull(letter.SentAtUtc);
+            }
+        }
+        finally
+        {
+            Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
+            Directory.Delete(folder, recursive: true);
+        }
     }
 }

@@ -27,7 +27,7 @@ public static class BatchEffects
         Actor actor, DateTime nowUtc, CancellationToken ct)
     {
         var kitIds = results.Select(r => r.KitId).Distinct().ToList();
-        // The kits are read before their results and each gets a new version below, so two batches posted at
+        // The kits are read before their results and each whose figures change gets a new version below, so two batches posted at
         // once for different bottles of one kit cannot both miss each other's rows and leave the kit waiting:
         // the second to save fails on the version (409, post again) and then sees the first one's rows.
         var kits = await db.Kits.Where(k => kitIds.Contains(k.Id)).ToListAsync(ct);
@@ -60,7 +60,7 @@ public static class BatchEffects
         var analyzed = new List<int>();
         foreach (var kit in kits)
         {
-            kit.Version++;
+            if (changedKits.Contains(kit.Id)) kit.Version++;
             // A held batch released days later may find a kit replaced, cancelled or closed meanwhile. Its
             // results are kept on record (the batch view flags them) but move nothing, and the rest of the
             // batch still comes into effect; at intake the checker refuses such kits outright.
@@ -69,7 +69,8 @@ public static class BatchEffects
                 // A closed kit's household already has its letter: new figures for it need a person to look.
                 if (kit.State == KitState.Closed && changedKits.Contains(kit.Id))
                     db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, AttentionFlag.CorrectedAfterLetter,
-                        $"Results released for closed kit {kit.Code} differ from its letter (batch {batch.BatchId} version {batch.Version}); the kit stays closed.", nowUtc));
+                        $"Results released for closed kit {kit.Code} differ from its letter (batch {batch.BatchId} version {batch.Version}); " +
+                        "the kit stays closed: call the household, and issue a replacement kit if a new test is needed.", nowUtc));
                 continue;
             }
             var lead = covered[kit.Id].ToHashSet();

@@ -79,7 +79,7 @@ public static class BatchIntake
         if (latest is not null && !batch.Correction) return BatchProblems.ChangedContent(batch.BatchId, latest.Version);
         if (latest is null && batch.Correction)
             return BatchProblems.Unprocessable([new("", "correction", $"There is no batch {batch.BatchId} to correct.")]);
-        if (latest is not null && await BatchCorrections.RowsLeftOutAsync(db, latest, batch, ct) is { Count: > 0 } leftOut)
+        if (latest is not null && await BatchCorrections.RowsLeftOutAsync(db, batch.BatchId, batch, ct) is { Count: > 0 } leftOut)
             return BatchProblems.Unprocessable(leftOut);
 
         var now = clock.GetUtcNow().UtcDateTime;

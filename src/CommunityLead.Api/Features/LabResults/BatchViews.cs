@@ -20,11 +20,12 @@ public static class BatchViews
         var flags = flagged.SelectMany(r => Holding(r.HoldingFlags, json).Select(f => new ResultFlag(
             r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, KebabEnum.Name(f.Code), f.Message))).ToList();
         // Results for a kit that never took any and never will (a held batch released after the kit was
-        // replaced, say). Closed kits are not flagged: their earlier results did count.
+        // replaced, say). Closed kits are not flagged (their earlier results did count), nor lost ones (a lost
+        // kit can still turn up and be received).
         var stopped = (await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == batch.Id)
                 .Join(db.Kits, r => r.KitId, k => k.Id, (r, k) => new { r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, k.State })
                 .ToListAsync(ct))
-            .Where(r => r.State is KitState.Cancelled or KitState.Rejected or KitState.Lost);
+            .Where(r => r.State is KitState.Cancelled or KitState.Rejected);
         flags.AddRange(stopped.Select(r => new ResultFlag(r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, "kit-not-open",
             $"Kit {r.KitCode} is {KebabEnum.Name(r.State)}: this result is kept on record but changes nothing for the kit.")));
         return new BatchOutcome(batch.BatchId, batch.Version, batch.Status, batch.Method, batch.AnalyzedAt, batch.ResultCount,

@@ -28,16 +28,20 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
     /// <summary>Letters for the given kits; kits without a stored interpretation are skipped.</summary>
     public async Task<List<RenderedLetter>> IssueAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
     {
-        try
+        for (var attempt = 1; ; attempt++)
         {
-            return await IssueOnceAsync(kitIds, language, actor, ct);
-        }
-        catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
-        {
-            // Another request (or instance) recorded the same letter a moment ago: the unique index kept one
-            // record; issuing again finds and returns it.
-            db.ChangeTracker.Clear();
-            return await IssueOnceAsync(kitIds, language, actor, ct);
+            try
+            {
+                return await IssueOnceAsync(kitIds, language, actor, ct);
+            }
+            catch (DbUpdateException e) when (StoreErrors.IsLostRace(e) && attempt < 3)
+            {
+                // Another request (or instance) recorded the same letter a moment ago: the unique index kept one
+                // record; issuing again finds and returns it. Only our unsaved letter records are dropped, not
+                // whatever else the caller is tracking.
+                foreach (var added in db.ChangeTracker.Entries<IssuedLetter>().Where(x => x.State == EntityState.Added).ToList())
+                    added.State = EntityState.Detached;
+            }
         }
     }
 

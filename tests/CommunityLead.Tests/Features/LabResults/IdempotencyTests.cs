@@ -168,13 +168,53 @@ public class IdempotencyTests
         Assert.Equal(new HashSet<string> { "results" }, ProblemKeys(refused));
         var reasons = refused["errors"]!["results"]!.AsArray().Select(r => r!.GetValue<string>()).ToList();
         Assert.Equal(2, reasons.Count);
-        Assert.Contains(reasons, r => r.Contains($"lead for kit {leftOut}, first-draw", StringComparison.Ordinal));
-        Assert.Contains(reasons, r => r.Contains($"lead for kit {leftOut}, flushed", StringComparison.Ordinal));
+        Assert.Contains(reasons, r => r.Contains($"lead result for kit {leftOut}, first-draw", StringComparison.Ordinal));
+        Assert.Contains(reasons, r => r.Contains($"lead result for kit {leftOut}, flushed", StringComparison.Ordinal));
         Assert.Equal(before, FootprintOf(app));
 
         // Restating the untouched rows makes it a correction like any other.
         var whole = Batch("CORR-3", [.. BothBottles(kept, firstDraw: 14.2), .. BothBottles(leftOut)]);
         (whole["correction"], whole["correctionReason"]) = (true, "Re-ran the first draw after a dilution error.");
         await PostBatchAsync(lab, whole, HttpStatusCode.Created);
+    }
+
+    [Fact]
+    public async Task Batch_CorrectionOfAHeldBatchLeavingOutARow_Accepted()
+    {
+        // Held rows never took effect, so leaving one out withdraws nothing that is in use: the lab may drop it.
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var (kept, dropped) = (await ReceivedKitAsync(coordinator, lab), await ReceivedKitAsync(coordinator, lab));
+        var failingQc = new[] { Qc("calibration-blank", measured: 0.04), Qc("calibration-check", measured: 8.0, expected: 10.0) };
+        await PostBatchAsync(lab, Batch("CORR-4", [.. BothBottles(kept), .. BothBottles(dropped)], failingQc), HttpStatusCode.Created);
+        var correction = Batch("CORR-4", BothBottles(kept));
+        (correction["correction"], correction["correctionReason"]) = (true, "The second kit's bottles were never in this run.");
+
+        var outcome = await PostBatchAsync(lab, correction, HttpStatusCode.Created);
+
+        Assert.Equal("accepted", outcome["status"]!.GetValue<string>());
+        await AssertAnalyzedAsync(coordinator, kept);
+        Assert.Equal("received", await KitStateAsync(coordinator, dropped));
+    }
+
+    [Fact]
+    public async Task Batch_CorrectionLeavingOutAClosedKitsRows_Accepted()
+    {
+        // A closed kit takes no results, so its rows could not be restated: they are not asked for.
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var lab = app.CreateClient(Roles.Lab);
+        var (open, closed) = (await ReceivedKitAsync(coordinator, lab), await ReceivedKitAsync(coordinator, lab));
+        await PostBatchAsync(lab, Batch("CORR-5", [.. BothBottles(open), .. BothBottles(closed)]), HttpStatusCode.Created);
+        app.WithDb(db =>
+        {
+            foreach (var k in db.Kits.Where(k => k.Code == closed)) k.State = KitState.Closed;
+            return db.SaveChanges();
+        });
+        var correction = Batch("CORR-5", BothBottles(open, firstDraw: 14.2));
+        (correction["correction"], correction["correctionReason"]) = (true, "Re-ran the first draw after a dilution error.");
+
+        await PostBatchAsync(lab, correction, HttpStatusCode.Created);
     }
 }

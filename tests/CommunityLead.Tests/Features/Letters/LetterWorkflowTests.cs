@@ -59,7 +59,7 @@ public class LetterWorkflowTests
         Assert.Contains("consejo médico", spanish);
         Assert.DoesNotContain("not medical advice", spanish, StringComparison.OrdinalIgnoreCase);
         // The levels' source is named in the letter's language (the us-lcri profile's "nameEs").
-        Assert.Contains("Mejoras a la Regla de Plomo y Cobre", spanish);
+        Assert.Contains("Mejoras a la Regla sobre el Plomo y el Cobre", spanish);
         Assert.DoesNotContain("Lead and Copper Rule Improvements", spanish);
         var english = LetterPdfText.Read((await LetterAsync(flow.Coordinator, code, "en")).Pdf).Flat;
         Assert.Contains("not medical advice", english, StringComparison.OrdinalIgnoreCase);

@@ -10,6 +10,14 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
+            // Before this index two requests rendering the same letter at once could both record it. Keep one
+            // record per letter (the one confirmed as sent, if any), so the index can be built on such a database.
+            migrationBuilder.Sql("""
+                DELETE FROM "Letters" WHERE "Id" NOT IN (
+                    SELECT COALESCE(MIN(CASE WHEN "SentAtUtc" IS NOT NULL THEN "Id" END), MIN("Id"))
+                    FROM "Letters" GROUP BY "KitId", "InterpretationId", "Sha256");
+                """);
+
             migrationBuilder.CreateIndex(
                 name: "IX_Letters_KitId_InterpretationId_Sha256",
                 table: "Letters",
