@@ -23,6 +23,7 @@ public class HouseholdConfiguration : IEntityTypeConfiguration<Household>
         b.Property(h => h.ConsentVersion).HasMaxLength(50);
         b.Property(h => h.AreaCode).HasMaxLength(40);
         b.HasIndex(h => h.AreaCode);
+        b.Property(h => h.Version).IsConcurrencyToken().HasDefaultValue(1);
         b.HasMany(h => h.Kits).WithOne(k => k.Household).HasForeignKey(k => k.HouseholdId).OnDelete(DeleteBehavior.Restrict);
     }
 }

@@ -22,6 +22,10 @@ public class Household
     public bool FilterInUse { get; set; }
     public DateTime CreatedAtUtc { get; set; }
     public DateTime UpdatedAtUtc { get; set; }
+
+    /// <summary>Moves on with every change; sent as the ETag, so an edit based on an old read is refused.</summary>
+    public int Version { get; set; } = 1;
+
     public List<Kit> Kits { get; set; } = [];
 }
 

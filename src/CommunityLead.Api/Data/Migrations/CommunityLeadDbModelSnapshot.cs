@@ -255,6 +255,12 @@ namespace CommunityLead.Api.Data.Migrations
                     b.Property<DateTime>("UpdatedAtUtc")
                         .HasColumnType("TEXT");
 
+                    b.Property<int>("Version")
+                        .IsConcurrencyToken()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER")
+                        .HasDefaultValue(1);
+
                     b.Property<string>("WaterSource")
                         .IsRequired()
                         .HasMaxLength(40)

@@ -270,6 +270,12 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                     b.Property<DateTime>("UpdatedAtUtc")
                         .HasColumnType("timestamp with time zone");
 
+                    b.Property<int>("Version")
+                        .IsConcurrencyToken()
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("integer")
+                        .HasDefaultValue(1);
+
                     b.Property<string>("WaterSource")
                         .IsRequired()
                         .HasMaxLength(40)
