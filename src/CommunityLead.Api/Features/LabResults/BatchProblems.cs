@@ -40,7 +40,8 @@ public static class BatchProblems
                     "(\"correction\": true and a \"correctionReason\"; in CSV, ?correction=true&correctionReason=...).",
             extensions: new Dictionary<string, object?> { ["batchId"] = batchId, ["currentVersion"] = version });
 
-    public static ProblemHttpResult Raced(string batchId) =>
+    /// <param name="retry">What to do again, in the words of the request that lost ("Post it again.").</param>
+    public static ProblemHttpResult Raced(string batchId, string retry = "Post it again.") =>
         TypedResults.Problem(statusCode: StatusCodes.Status409Conflict, title: "The batch changed while this request was handled.",
-            detail: $"Batch {batchId} or one of its kits was changed by another request at the same moment. Post it again.");
+            detail: $"Batch {batchId} or one of its kits was changed by another request at the same moment. {retry}");
 }

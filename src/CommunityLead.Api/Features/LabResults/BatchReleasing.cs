@@ -48,7 +48,7 @@ public static class BatchReleasing
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
-            return BatchProblems.Raced(batchId);
+            return BatchProblems.Raced(batchId, "Read the batch again: it may already be released.");
         }
         await interpreting.AfterResultsAsync(effects.Analyzed, actor, now, ct);
         return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, ct));

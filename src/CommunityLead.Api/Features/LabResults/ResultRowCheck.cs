@@ -21,7 +21,9 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         }
 
         if (!BatchChecker.AcceptingStates.Contains(kit.State))
-            Problem("kitCode", $"Kit {kit.Code} is {KebabEnum.Name(kit.State)}; results are taken once the kit has been received.");
+            Problem("kitCode", KitLifecycle.IsTerminal(kit.State)
+                ? $"Kit {kit.Code} is {KebabEnum.Name(kit.State)} and takes no more results. If these bottles are a new test, the program issues a replacement kit."
+                : $"Kit {kit.Code} is {KebabEnum.Name(kit.State)}; results are taken once the kit has been received.");
         var matrix = kit.Kind == KitKind.Soil ? Matrix.Soil : Matrix.Water;
 
         SampleFacts? sample = null;

@@ -73,6 +73,25 @@ public class BatchRefusalTests
     }
 
     [Fact]
+    public async Task JsonBatch_ResultsForAClosedKit_422SayingItTakesNoMoreAndWhatToDo()
+    {
+        using var app = new CommunityLeadFactory();
+        var (coordinator, lab) = (app.CreateClient(Roles.Coordinator), app.CreateClient(Roles.Lab));
+        var kit = await ReceivedKitAsync(coordinator, lab);
+        app.WithDb(db =>
+        {
+            foreach (var k in db.Kits.Where(k => k.Code == kit)) k.State = CommunityLead.Rules.Kits.KitState.Closed;
+            return db.SaveChanges();
+        });
+
+        var refused = await PostBatchAsync(lab, Batch("LATE-1", BothBottles(kit)), HttpStatusCode.UnprocessableEntity);
+
+        var reason = refused["errors"]!["/results/0/kitCode"]![0]!.GetValue<string>();
+        Assert.Contains("is closed and takes no more results", reason, StringComparison.Ordinal);
+        Assert.Contains("replacement kit", reason, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task JsonBatch_AnalyzedExactly16HoursAfterAcid_IsAccepted()
     {
         // The wait is "at least 16 h" [from memory: EPA Methods 200.7/200.8 §8.3]: exactly 16 h is enough.
