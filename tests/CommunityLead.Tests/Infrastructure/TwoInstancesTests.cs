@@ -3,6 +3,7 @@ using System.Net.Http.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Tests.Features.Interpretation;
 using Microsoft.EntityFrameworkCore;
+using static CommunityLead.Tests.Features.LabResults.LabFixtures;
 using static CommunityLead.Tests.Infrastructure.Fixtures;
 
 namespace CommunityLead.Tests.Infrastructure;
@@ -74,16 +75,7 @@ public class TwoInstancesTests
         using var a = new CommunityLeadFactory();
         using var b = new CommunityLeadFactory(sharedConnectionString: a.ConnectionString);
         var code = await new ResultsFlow(a).ReceivedKitAsync();
-        var batch = new
-        {
-            batchId = "B-TWICE-1", method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
-            results = new object[]
-            {
-                new { kitCode = code, bottle = "first-draw", analyte = "lead", value = 4.2, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 },
-                new { kitCode = code, bottle = "flushed", analyte = "lead", value = 1.1, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 },
-            },
-            qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = 10.1, unit = "ug/L" } },
-        };
+        var batch = Batch("B-TWICE-1", BothBottles(code, firstDraw: 4.2, flushed: 1.1));
 
         var posts = new[] { a, b, a, b }.Select(app => app.CreateClient(Roles.Lab).PostAsJsonAsync("/api/lab/batches", batch));
         var statuses = (await Task.WhenAll(posts)).Select(r => r.StatusCode).ToList();
@@ -114,7 +106,7 @@ public class TwoInstancesTests
         {
             var posts = new[] { (a, "first-draw", 7.5), (b, "flushed", 2.5) }.Select(async bottle =>
             {
-                var body = OneBottle($"SPLIT-{i}-{bottle.Item2}", code, bottle.Item2, bottle.Item3);
+                var body = Batch($"SPLIT-{i}-{bottle.Item2}", [Result(code, bottle.Item2, bottle.Item3)]);
                 var lab = bottle.Item1.CreateClient(Roles.Lab);
                 var response = await lab.PostAsJsonAsync("/api/lab/batches", body);
                 if (response.StatusCode == HttpStatusCode.Conflict) response = await lab.PostAsJsonAsync("/api/lab/batches", body);
@@ -126,13 +118,6 @@ public class TwoInstancesTests
         foreach (var code in kits)
             Assert.NotEqual("received", (await GetAsync(flow.Coordinator, $"/api/kits/{code}"))["state"]!.GetValue<string>());
     }
-
-    private static object OneBottle(string batchId, string code, string bottle, double value) => new
-    {
-        batchId, method = "EPA 200.8", analyzedAt = "2026-04-05T10:00:00+00:00",
-        results = new[] { new { kitCode = code, bottle, analyte = "lead", value, unit = "ug/L", mdl = 0.3, reportingLimit = 1.0 } },
-        qc = new[] { new { type = "calibration-check", analyte = "lead", expected = 10.0, measured = 10.1, unit = "ug/L" } },
-    };
 
     [Fact]
     public async Task TwoInstances_HeldBatchReleasedByTwoCoordinatorsAtOnce_OneReleaseOnRecord()
