@@ -104,6 +104,8 @@ internal static class ColumnDecisions
         new Bounded("IssuedLetter.Sha256", 64, "SHA-256 in hex", () => SHA256.HashSizeInBytes * 2),
         new Bounded("IssuedLetter.IssuedBy", 100, "an actor's label", ActorLabel),
         new Bounded("IssuedLetter.SentBy", 100, "an actor's label", ActorLabel),
+        new Bounded("IssuedLetter.CatalogVersion", 20, "the message catalogue's version", () => MessageCatalog.VersionLength),
+        new Bounded("IssuedLetter.ReleasedBy", 100, "an actor's label", ActorLabel),
 
         // Keys and the audit trail.
         new Validated("ApiKey.Label", 100, $"{nameof(ApiKeyService)}.{nameof(ApiKeyService.CreateAsync)} (at most {ApiKeyService.LabelMaxLength})",

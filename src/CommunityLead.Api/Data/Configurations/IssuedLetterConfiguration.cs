@@ -14,6 +14,8 @@ public class IssuedLetterConfiguration : IEntityTypeConfiguration<IssuedLetter>
         b.Property(l => l.Sha256).HasMaxLength(64);
         b.Property(l => l.IssuedBy).HasMaxLength(100);
         b.Property(l => l.SentBy).HasMaxLength(100);
+        b.Property(l => l.CatalogVersion).HasMaxLength(20);
+        b.Property(l => l.ReleasedBy).HasMaxLength(100);
         b.HasIndex(l => new { l.KitId, l.IssuedAtUtc });
         b.HasIndex(l => l.SentAtUtc);
         // One record per distinct letter: two requests rendering it at once must not both record it.

@@ -29,4 +29,12 @@ public class IssuedLetter
     public string? SentBy { get; set; }
     /// <summary>Days from collection to the confirmed sending (the LCRI asks utilities for 3 business days).</summary>
     public int? DaysFromCollection { get; set; }
+    /// <summary>The message catalogue version the wording came from, so a medical advisor can see what was approved.</summary>
+    public string? CatalogVersion { get; set; }
+    /// <summary>
+    /// For a result that needed a person first (urgent or implausible): the coordinator who checked it and called
+    /// the household, and when. Null for letters that needed no release.
+    /// </summary>
+    public string? ReleasedBy { get; set; }
+    public DateTime? ReleasedAtUtc { get; set; }
 }

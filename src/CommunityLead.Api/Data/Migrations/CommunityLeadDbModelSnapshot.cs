@@ -310,6 +310,10 @@ namespace CommunityLead.Api.Data.Migrations
                         .ValueGeneratedOnAdd()
                         .HasColumnType("INTEGER");
 
+                    b.Property<string>("CatalogVersion")
+                        .HasMaxLength(20)
+                        .HasColumnType("TEXT");
+
                     b.Property<DateOnly>("CollectedOn")
                         .HasColumnType("TEXT");
 
@@ -359,6 +363,13 @@ namespace CommunityLead.Api.Data.Migrations
 
                     b.Property<int>("ProfileVersion")
                         .HasColumnType("INTEGER");
+
+                    b.Property<DateTime?>("ReleasedAtUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ReleasedBy")
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
 
                     b.Property<DateTime?>("SentAtUtc")
                         .HasColumnType("TEXT");

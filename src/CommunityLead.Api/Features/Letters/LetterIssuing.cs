@@ -88,7 +88,7 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
                     KitId = kit.Id, KitCode = kit.Code, InterpretationId = stored.Id, ProfileId = stored.ProfileId,
                     ProfileVersion = stored.ProfileVersion, Language = lang, Kind = kind,
                     ContentJson = JsonSerializer.Serialize(content, Json), Sha256 = hash, Pages = LetterPdf.PageCount(pdf),
-                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = collected,
+                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = collected, CatalogVersion = MessageCatalog.Version,
                 };
                 db.Letters.Add(record);
             }

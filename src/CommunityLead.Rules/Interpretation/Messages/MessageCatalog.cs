@@ -16,6 +16,22 @@ public static partial class MessageCatalog
     /// </summary>
     public static IReadOnlyList<MessageTemplate> All => all.Value;
 
+    /// <summary>
+    /// Which wording a letter was written with: the first 12 hex digits of the SHA-256 of every code and its two
+    /// texts, in code order. Any change of a word gives a new version, so what a medical advisor approved (the
+    /// exported catalogue carries the same version) can be matched to each letter without anyone remembering
+    /// to raise a number.
+    /// </summary>
+    public static string Version => version.Value;
+
+    public const int VersionLength = 12;
+
+    private static readonly Lazy<string> version = new(() =>
+    {
+        var text = string.Join("\n", All.OrderBy(t => t.Code, StringComparer.Ordinal).Select(t => $"{t.Code}\t{t.En}\t{t.Es}"));
+        return Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(text)))[..VersionLength];
+    });
+
     private static readonly Lazy<IReadOnlyList<MessageTemplate>> all = new(() =>
         [.. typeof(MessageCatalog).GetFields(BindingFlags.Public | BindingFlags.Static)
             .Where(f => f.FieldType == typeof(MessageTemplate))
