@@ -41,6 +41,7 @@ public enum AttentionFlag
 }
 
 /// <param name="LevelValue">The level the value was compared with, in <paramref name="Unit"/>; null when none applies.</param>
+/// <param name="ScreeningLevel">Soil: <paramref name="LevelValue"/> is a screening level, not a hazard standard.</param>
 public sealed record Finding(
     BottleType Bottle,
     int? Position,
@@ -52,7 +53,8 @@ public sealed record Finding(
     Band Band,
     double? LevelValue,
     string? LevelMeaning,
-    SoilComparison? Soil = null);
+    SoilComparison? Soil = null,
+    bool ScreeningLevel = false);
 
 /// <summary>Where lead peaked in a sequential profile, and the length of pipe that much water fills.</summary>
 public sealed record SequentialPeak(int Position, double PeakValue, double LitresBeforePeak, double PipeMetres);

@@ -56,11 +56,17 @@ public static partial class Interpreter
         findings.Any(f => f.Analyte == Analyte.Lead && !f.BelowReportingLimit);
 
     /// <summary>A finding plus what its message needs beyond the Finding record.</summary>
+    /// <param name="Urgent">Lead in water: the program's urgent level, named beside the action level in an urgent line.</param>
+    /// <param name="Hazard">Soil: the hazard standard for the sample's place, named beside a screening level it exceeds.</param>
+    /// <param name="Screening">Soil: the finding was judged against the screening level, not the hazard standard.</param>
     private sealed record Judged(
         Finding Finding,
         double ReportingLimit,
         double? ActionLevel = null,
         bool Taste = false,
         double? Margin = null,
-        bool OtherSourceLevel = false);
+        bool OtherSourceLevel = false,
+        double? Urgent = null,
+        double? Hazard = null,
+        bool Screening = false);
 }

@@ -40,8 +40,15 @@ internal static class SampleWords
     public static readonly Phrase CautionLevel = new("Caution level", "Nivel de precaución");
     public static readonly Phrase TasteLevel = new("Taste level", "Nivel por sabor");
     public static readonly Phrase UrgentLevel = new("Urgent level", "Nivel urgente");
-    public static readonly Phrase LowestLevel = new("Lowest level we use", "Nivel más bajo que usamos");
+    public static readonly Phrase LowestLevel = new("Our level", "Nuestro nivel");
     public static readonly Phrase SoilLevel = new("Level for this place", "Nivel para este lugar");
+
+    /// <summary>An urgent result names both levels, as its sentence does: "Action level 10 µg/L; urgent from 50 µg/L".</summary>
+    public static Phrase UrgentLevels(double action, double urgent, string unit)
+    {
+        var (a, u) = (MessageWords.Amount(action, unit), MessageWords.Amount(urgent, unit));
+        return new($"{ActionLevel.En} {a.En}; urgent from {u.En}", $"{ActionLevel.Es}: {a.Es}; urgente desde {u.Es}");
+    }
 
     /// <summary>"Action level 10 µg/L" / "Nivel de acción: 10 µg/L".</summary>
     public static Phrase Level(Phrase name, double value, string unit)
@@ -51,9 +58,16 @@ internal static class SampleWords
     }
 
     /// <summary>Where a soil result stands against its level; "not sure" when its uncertainty spans the level.</summary>
-    public static Phrase SoilComparedWith(SoilComparison comparison, double level, string unit)
+    public static Phrase SoilComparedWith(SoilComparison comparison, double level, string unit, bool screening)
     {
         var amount = MessageWords.Amount(level, unit);
+        if (screening)
+            return comparison switch
+            {
+                SoilComparison.Above => new($"Above the EPA screening level of {amount.En}", $"Por encima del nivel de evaluación de la EPA, {amount.Es}"),
+                SoilComparison.Below => new($"Below the EPA screening level of {amount.En}", $"Por debajo del nivel de evaluación de la EPA, {amount.Es}"),
+                _ => new($"Not sure: close to the EPA screening level of {amount.En}", $"No es seguro: cerca del nivel de evaluación de la EPA, {amount.Es}"),
+            };
         return comparison switch
         {
             SoilComparison.Above => new($"At or above the level of {amount.En}", $"Igual o por encima del nivel de {amount.Es}"),
