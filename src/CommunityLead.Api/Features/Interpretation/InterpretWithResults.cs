@@ -7,25 +7,32 @@ using Microsoft.Extensions.Options;
 namespace CommunityLead.Api.Features.Interpretation;
 
 /// <summary>
-/// Runs right after a batch's results are saved: kits that became complete are interpreted at once, so urgent
-/// results reach the attention list without anyone asking. It is a second step on purpose: the results are
-/// already safe, and if this step loses a race the kits stay analyzed and can be interpreted again by POST.
+/// Saves a batch's results (and what they did to kits) and interprets the kits they completed, in one database
+/// transaction: results are never on record without the interpretation, and so the attention items, they call
+/// for. Once writing begins the caller's token is no longer used: a lab whose request times out on a large batch,
+/// or disconnects, must not leave urgent kits analyzed with no one told. A process killed midway leaves nothing
+/// (the database rolls the transaction back), so the lab's next post is a first post, not a repeat.
+/// Why one transaction rather than a queue worked in the background: DEVELOPERS.md, "Results and interpretation".
 /// </summary>
-public sealed class InterpretAfterResults(CommunityLeadDb db, ProfileCatalog catalog, IOptions<JsonOptions> json,
-    ILogger<InterpretAfterResults> log)
+public sealed class InterpretWithResults(CommunityLeadDb db, ProfileCatalog catalog, IOptions<JsonOptions> json)
 {
-    public async Task AfterResultsAsync(IReadOnlyList<int> kitIds, Actor actor, DateTime nowUtc, CancellationToken ct)
+    /// <summary>
+    /// Saves everything the context tracks, then interprets <paramref name="completedKits"/>. A lost race throws
+    /// the <see cref="DbUpdateException"/> of the failed save, with nothing written.
+    /// </summary>
+    public async Task SaveAsync(IReadOnlyList<int> completedKits, Actor actor, DateTime nowUtc)
     {
-        if (kitIds.Count == 0) return;
-        db.ChangeTracker.Clear();
-        await KitInterpreting.InterpretAsync(db, catalog, kitIds, actor, nowUtc, json.Value.SerializerOptions, ct);
-        try
+        var uncancellable = CancellationToken.None;
+        await using var transaction = await db.Database.BeginTransactionAsync(uncancellable);
+        await db.SaveChangesAsync(uncancellable);
+        if (completedKits.Count > 0)
         {
-            await db.SaveChangesAsync(ct);
+            // The results just written are read back inside this transaction. Clearing first spares the second
+            // save from checking every row of a 10,000-row batch for changes again.
+            db.ChangeTracker.Clear();
+            await KitInterpreting.InterpretAsync(db, catalog, completedKits, actor, nowUtc, json.Value.SerializerOptions, uncancellable);
+            await db.SaveChangesAsync(uncancellable);
         }
-        catch (DbUpdateConcurrencyException)
-        {
-            log.LogWarning("Interpretation of {Count} kits lost a race; they stay analyzed for a later interpretation.", kitIds.Count);
-        }
+        await transaction.CommitAsync(uncancellable);
     }
 }
