@@ -28,7 +28,8 @@ public static class DemoResults
         var json = services.GetRequiredService<IOptions<JsonOptions>>().Value.SerializerOptions;
         var clock = services.GetRequiredService<TimeProvider>();
         var options = services.GetRequiredService<IOptions<LabIntakeOptions>>().Value;
-        var interpreting = services.GetRequiredService<InterpretAfterResults>();
+        var interpreting = services.GetRequiredService<InterpretWithResults>();
+        var repair = services.GetRequiredService<InterpretationRepair>();
         var folder = SeedData.Find("demo-batches");
         var files = folder is null ? [] : Directory.GetFiles(folder, "*.json").Order(StringComparer.Ordinal).ToArray();
         var versions = new Dictionary<string, int>();
@@ -42,7 +43,7 @@ public static class DemoResults
             var batchId = parsed.Request.BatchId ?? "";
             var version = versions[batchId] = versions.GetValueOrDefault(batchId) + 1;
             if (await db.LabBatches.AnyAsync(b => b.BatchId == batchId && b.Version >= version)) continue;
-            var outcome = await BatchIntake.IngestAsync(parsed, db, options, json, clock, interpreting, Lab, CancellationToken.None);
+            var outcome = await BatchIntake.IngestAsync(parsed, db, options, json, clock, interpreting, repair, Lab, CancellationToken.None);
             if (outcome.Result is ProblemHttpResult problem)
             {
                 error.WriteLine($"{file}: {problem.ProblemDetails.Title} {problem.ProblemDetails.Detail}");

@@ -24,7 +24,11 @@ public static class ServiceSetup
         services.Configure<InterpretationOptions>(builder.Configuration.GetSection("Interpretation"));
         services.Configure<ReportOptions>(builder.Configuration.GetSection("Reports"));
         services.AddSingleton<ProfileCatalog>();
-        services.AddScoped<InterpretAfterResults>();
+        services.AddScoped<InterpretWithResults>();
+        services.AddScoped<InterpretationRepair>();
+        // One instance, so tests (and nothing else) can also run a sweep by hand.
+        services.AddSingleton<InterpretationSweep>();
+        services.AddHostedService(sp => sp.GetRequiredService<InterpretationSweep>());
         services.AddSingleton(builder.Configuration.GetSection("Letters").Get<LetterSettings>()
             ?? throw new InvalidOperationException("The Letters settings (program name, contacts) are missing."));
         services.AddSingleton<ILetterLayout, PdfLetterLayout>();

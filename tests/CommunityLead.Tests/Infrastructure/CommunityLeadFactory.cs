@@ -19,12 +19,15 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
     private readonly string folder = Path.Combine(Path.GetTempPath(), "cl-tests", Guid.NewGuid().ToString("N"));
 
     private readonly bool ownsDatabase;
+    private readonly Action<IServiceCollection>? extraServices;
 
     /// <param name="now">The test clock's start.</param>
     /// <param name="sharedConnectionString">Another instance's database (a second service instance on the same
     /// store); this factory then leaves it in place when disposed.</param>
-    public CommunityLeadFactory(DateTimeOffset? now = null, string? sharedConnectionString = null)
+    /// <param name="services">Test-only services added after the service's own (a log capture, a save interceptor).</param>
+    public CommunityLeadFactory(DateTimeOffset? now = null, string? sharedConnectionString = null, Action<IServiceCollection>? services = null)
     {
+        extraServices = services;
         Clock = new TestClock(now ?? new DateTimeOffset(2026, 4, 10, 12, 0, 0, TimeSpan.Zero));
         ownsDatabase = sharedConnectionString is null;
         ConnectionString = sharedConnectionString
@@ -49,6 +52,7 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
         {
             services.RemoveAll<TimeProvider>();
             services.AddSingleton<TimeProvider>(Clock);
+            extraServices?.Invoke(services);
         });
     }
 
