@@ -67,7 +67,7 @@ public static partial class MessageCatalog
 
     public static readonly MessageTemplate RetestHoldingTime = new("retest.outside-holding-time",
         "Too much time passed before the lab could test the sample.",
-        "Pasó demasiado tiempo antes de que el laboratorio pudiera analizar la muestra.");
+        "Pasó demasiado tiempo antes de que la muestra se pudiera analizar en el laboratorio.");
 
     public static readonly MessageTemplate RetestQcHeld = new("retest.qc-held",
         "The lab's own quality checks did not pass, so it could not confirm the result.",
