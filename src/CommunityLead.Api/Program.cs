@@ -8,6 +8,7 @@ using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Reports;
+using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
 
@@ -50,6 +51,7 @@ app.MapLetters();
 app.MapAttention();
 app.MapReports();
 app.MapAdmin();
+app.MapWording();
 
 await app.RunAsync();
 return 0;

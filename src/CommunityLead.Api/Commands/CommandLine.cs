@@ -1,7 +1,7 @@
 namespace CommunityLead.Api.Commands;
 
 /// <summary>
-/// The executable's commands (migrate, keys, demo, backup). Each runs on the configured database and
+/// The executable's commands (migrate, keys, demo, backup, messages). Each runs on the configured database and
 /// exits; with no command the service starts. Errors go to standard error with a non-zero exit code.
 /// </summary>
 public interface ICommand
@@ -19,6 +19,7 @@ public static class CommandLine
         "keys" => new KeysCommand(args[1..]),
         "demo" => new DemoCommand(),
         "backup" => new BackupCommand(args[1..]),
+        "messages" => new MessagesCommand(args[1..]),
         "help" or "--help" => new HelpCommand(),
         _ => null,
     };
@@ -40,6 +41,8 @@ public static class CommandLine
           keys revoke L                         revoke the key labelled L
           demo                                  load the invented demo scenario from seed-data/ (safe to repeat)
           backup FILE                           write a consistent copy of the database to FILE
+          messages export [--format csv|json] [--out FILE]
+                                                every sentence a household can get, with notes and reading scores
         The database is ConnectionStrings:CommunityLead (environment ConnectionStrings__CommunityLead).
         """;
 }

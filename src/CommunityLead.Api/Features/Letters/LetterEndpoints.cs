@@ -7,7 +7,7 @@ namespace CommunityLead.Api.Features.Letters;
 public sealed record LetterSentRequest(int? LetterId);
 
 public sealed record LetterListing(int Id, string KitCode, LetterKind Kind, LetterLanguage Language, string ProfileId, int ProfileVersion,
-    string Sha256, int Pages, DateTime IssuedAt, DateTime? SentAt, int? DaysFromCollection);
+    string Sha256, int Pages, DateTime IssuedAt, DateTime? SentAt, int? DaysFromCollection, string? CatalogVersion);
 
 public static class LetterEndpoints
 {

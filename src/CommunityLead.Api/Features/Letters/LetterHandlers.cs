@@ -134,5 +134,5 @@ public static class LetterHandlers
     private static string FileName(IssuedLetter l) => $"letter-{l.KitCode}-{KebabEnum.Name(l.Language)}.pdf";
 
     private static LetterListing Listing(IssuedLetter l) =>
-        new(l.Id, l.KitCode, l.Kind, l.Language, l.ProfileId, l.ProfileVersion, l.Sha256, l.Pages, l.IssuedAtUtc, l.SentAtUtc, l.DaysFromCollection);
+        new(l.Id, l.KitCode, l.Kind, l.Language, l.ProfileId, l.ProfileVersion, l.Sha256, l.Pages, l.IssuedAtUtc, l.SentAtUtc, l.DaysFromCollection, l.CatalogVersion);
 }

@@ -5,6 +5,7 @@ using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Letters.Composing;
+using CommunityLead.Api.Features.Wording;
 using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using Microsoft.AspNetCore.Http.Json;
@@ -88,7 +89,7 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
                     KitId = kit.Id, KitCode = kit.Code, InterpretationId = stored.Id, ProfileId = stored.ProfileId,
                     ProfileVersion = stored.ProfileVersion, Language = lang, Kind = kind,
                     ContentJson = JsonSerializer.Serialize(content, Json), Sha256 = hash, Pages = LetterPdf.PageCount(pdf),
-                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = collected, CatalogVersion = MessageCatalog.Version,
+                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = collected, CatalogVersion = WordingCatalogue.Version,
                 };
                 db.Letters.Add(record);
             }

@@ -14,7 +14,7 @@ public static partial class MessageCatalog
     /// </summary>
     public static readonly MessageTemplate StepFilter = new("step.filter",
         "Use a filter certified to NSF/ANSI 53 for lead. Look for NSF/ANSI 42 too, for small particles. Change the cartridge when the maker says.",
-        "Use un filtro certificado según la norma NSF/ANSI 53 para reducir el plomo. Busque que también cumpla la NSF/ANSI 42, para partículas pequeñas. Cambie el cartucho cuando lo indique el fabricante.");
+        "Use un filtro certificado con la norma NSF/ANSI 53 para el plomo. Es mejor si también cumple la NSF/ANSI 42, para partículas. Cambie el cartucho cuando lo diga el fabricante.");
 
     /// <summary>The urgent plan: bottled water only until a retest (no filter, no running the tap meanwhile).</summary>
     public static readonly MessageTemplate StepBottledOnly = new("step.bottled-only",
@@ -104,7 +104,7 @@ public static partial class MessageCatalog
 
     public static readonly MessageTemplate RetestHoldingTime = new("retest.outside-holding-time",
         "Too much time passed before the lab could test the sample.",
-        "Pasó demasiado tiempo antes de que el laboratorio pudiera analizar la muestra.");
+        "Pasó demasiado tiempo antes de que la muestra se pudiera analizar en el laboratorio.");
 
     public static readonly MessageTemplate RetestQcHeld = new("retest.qc-held",
         "The lab's own quality checks did not pass, so it could not confirm the result.",

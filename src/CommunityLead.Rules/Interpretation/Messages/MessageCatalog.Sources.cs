@@ -66,7 +66,7 @@ public static partial class MessageCatalog
 
     public static readonly MessageTemplate WellPipe = new("service-line.well-pipe",
         "Your home is listed as having lead or galvanized steel pipe. A licensed plumber can check it and tell you how to replace it.",
-        "Según nuestros datos, su casa tiene tubería de plomo o de acero galvanizado. Un plomero con licencia puede revisarla y explicarle cómo reemplazarla.");
+        "Según nuestros datos, su casa tiene tubos de plomo o de acero galvanizado. Un plomero con licencia puede revisarlos y decirle cómo cambiarlos.");
 
     public static readonly MessageTemplate WellAdvice = new("well.advice",
         "Your water comes from a private well, so no one else tests it for you. Test it again, and ask your local health department how often to test and how to treat well water.",

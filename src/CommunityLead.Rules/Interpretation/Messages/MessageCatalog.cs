@@ -17,10 +17,10 @@ public static partial class MessageCatalog
     public static IReadOnlyList<MessageTemplate> All => all.Value;
 
     /// <summary>
-    /// Which wording a letter was written with: the first 12 hex digits of the SHA-256 of every code and its two
-    /// texts, in code order. Any change of a word gives a new version, so what a medical advisor approved (the
-    /// exported catalogue carries the same version) can be matched to each letter without anyone remembering
-    /// to raise a number.
+    /// Which messages a letter was written with: the first 12 hex digits of the SHA-256 of every code and its two
+    /// texts, in code order. Any change of a word gives a new version without anyone remembering to raise a
+    /// number. Letters record the API's WordingCatalogue.Version, which also covers the letter's own words; the
+    /// exported catalogue carries both.
     /// </summary>
     public static string Version => version.Value;
 
