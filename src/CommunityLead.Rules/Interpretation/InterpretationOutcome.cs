@@ -33,6 +33,8 @@ public enum AttentionFlag
 {
     // Declared most urgent first: the attention list sorts on this order.
     Urgent,
+    /// <summary>A result no tap or yard is likely to hold (a unit mix-up, swapped bottles): checked before any letter.</summary>
+    Implausible,
     ActionLevelVulnerableHome,
     ActionLevel,
     SuspectedServiceLine,
@@ -71,4 +73,11 @@ public sealed record Interpretation(
     SequentialPeak? Peak,
     IReadOnlyList<ValidityIssue> Validity,
     IReadOnlyList<Message> Messages,
-    IReadOnlyList<AttentionFlag> Flags);
+    IReadOnlyList<AttentionFlag> Flags)
+{
+    /// <summary>
+    /// Results to check with the lab before any letter, and why. Not a constructor parameter, so interpretations
+    /// stored before the check existed read back with none.
+    /// </summary>
+    public IReadOnlyList<ImplausibleResult> Implausible { get; init; } = [];
+}

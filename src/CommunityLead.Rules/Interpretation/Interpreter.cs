@@ -31,11 +31,15 @@ public static partial class Interpreter
         // keep their own bands for the coordinator.
         var band = validity.Count > 0 ? Band.Retest : findings.Max(f => f.Band);
         var sources = Sources.Find(kit, findings, levels, program);
-        var flags = Flags(kit, findings, band, sources);
+        var implausible = Implausible(findings, levels, program.Plausibility);
+        var flags = Flags(kit, findings, band, sources, implausible.Count > 0);
         var messages = kit.Kind == KitKind.Soil
             ? SoilLetter(kit, judged, band, validity)
             : WaterLetter(kit, judged, band, validity, sources);
-        return new Interpretation(band, profile.Id, profile.Version, findings, sources.Pattern, sources.Peak, validity, messages, flags);
+        return new Interpretation(band, profile.Id, profile.Version, findings, sources.Pattern, sources.Peak, validity, messages, flags)
+        {
+            Implausible = implausible,
+        };
     }
 
     /// <summary>Letter order: first liter, fifth liter, flushed, the sequential bottles, soil.</summary>

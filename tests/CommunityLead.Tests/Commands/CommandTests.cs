@@ -87,6 +87,13 @@ public class CommandTests
         Assert.True(app.WithDb(db => db.Interpretations.Count()) >= 100);
         Assert.True(app.WithDb(db => db.Letters.Count(l => l.SentAtUtc != null)) >= 20);
         Assert.True(app.WithDb(db => db.Attention.Any(a => a.Reason == CommunityLead.Rules.Interpretation.AttentionFlag.Urgent)));
+        // Urgent letters went out only after the demo's coordinator resolved their items (the release gate), before sending.
+        var released = app.WithDb(db => db.Letters.Where(l => l.SentAtUtc != null && l.ReleasedBy != null)
+            .Select(l => new { l.ReleasedBy, l.ReleasedAtUtc, l.SentAtUtc }).ToList());
+        Assert.NotEmpty(released);
+        Assert.All(released, l => Assert.True(l.ReleasedBy == "demo-loader" && l.ReleasedAtUtc < l.SentAtUtc));
+        Assert.False(app.WithDb(db => db.Letters.Any(l => l.SentAtUtc != null && l.ReleasedBy == null
+            && db.Attention.Any(a => a.InterpretationId == l.InterpretationId && a.Reason == CommunityLead.Rules.Interpretation.AttentionFlag.Urgent))));
         var letters = app.WithDb(db => db.Letters.Count());
 
         var second = await RunAsync(app, "demo");

@@ -95,7 +95,7 @@ internal static class ColumnDecisions
             nameof(ProfileValidationTests.Read_IdLongerThanItsColumn_IsRefused)),
         new Bounded("KitInterpretation.CreatedBy", 100, "an actor's label", ActorLabel),
         new Bounded("AttentionItem.KitCode", 16, "a kit's code", () => MaxLength("Kit.Code")),
-        new Composed("AttentionItem.Detail", 500, "AttentionText: a sentence with one figure, or retest reasons cut to fit; or a batch id (64)",
+        new Composed("AttentionItem.Detail", 500, "AttentionText: a sentence with one figure, or retest or implausible-result reasons cut to fit; or a batch id (64)",
             nameof(AttentionTextTests.AttentionText_WorstCases_FitTheDetailColumn)),
         new Bounded("AttentionItem.ResolvedBy", 100, "an actor's label", ActorLabel),
         new Validated("AttentionItem.ResolutionNote", 500, $"{nameof(ResolveValidator)} (else a fixed sentence)",

@@ -23,6 +23,8 @@ public sealed class InterpretationOptions
     /// zero or less: at start-up only. Cheap: it reads analyzed kits by index and batches of the last interval.
     /// </summary>
     public TimeSpan SweepInterval { get; set; } = TimeSpan.FromMinutes(5);
+    /// <summary>"Interpretation:Plausibility": results checked with the lab before any letter (defaults and their sources beside them).</summary>
+    public PlausibilityLimits Plausibility { get; set; } = new();
 
-    public ProgramRules ProgramRules => new(AdvisoryLeadUgL, UrgentLeadUgL, PipeInnerDiameterMm);
+    public ProgramRules ProgramRules => new(AdvisoryLeadUgL, UrgentLeadUgL, PipeInnerDiameterMm) { Plausibility = Plausibility };
 }
