@@ -1,5 +1,4 @@
 using System.CommandLine;
-using System.CommandLine.Help;
 
 namespace CommunityLead.Api.Commands;
 
@@ -61,7 +60,10 @@ public sealed class ParsedCommandLine
     /// <summary>Why the arguments were refused; empty when they were understood.</summary>
     public IReadOnlyList<string> Problems { get; }
 
-    public bool IsHelp => Problems.Count == 0 && (result.Action is HelpAction || tree.IsHelp(result.CommandResult.Command));
+    /// <summary>Help or the version: the 'help' command, or an option that answers by itself (--help, --version).</summary>
+    public bool IsHelp => Problems.Count == 0 && (tree.IsHelp(result.CommandResult.Command) || AnsweredByAnOption);
+
+    private bool AnsweredByAnOption => result.Action is { } action && action != result.CommandResult.Command.Action;
 
     public bool RunsService => Problems.Count == 0 && !IsHelp && tree.IsService(result.CommandResult.Command);
 
@@ -82,7 +84,8 @@ public sealed class ParsedCommandLine
         }
         if (IsHelp)
         {
-            CommandLine.WriteHelp(tree.Root, tree.IsHelp(result.CommandResult.Command) ? [] : Path(), output);
+            if (AnsweredByAnOption) return await result.InvokeAsync(new InvocationConfiguration { Output = output, Error = error });
+            CommandLine.WriteHelp(tree.Root, [], output);
             return 0;
         }
         if (RunsService) throw new InvalidOperationException("The service is started by Program, not as a command.");

@@ -74,6 +74,20 @@ public class CommandLineTests
         foreach (var command in new[] { "serve", "migrate", "keys", "demo", "backup" }) Assert.Contains(command, output.ToString());
     }
 
+    [Theory]
+    [InlineData("keys", "create", "--help")]
+    [InlineData("--version")]
+    public async Task CommandLine_HelpOrVersionOption_AnswersWithoutServicesAndNeverStartsTheService(params string[] args)
+    {
+        var parsed = CommandLine.Parse(args);
+        Assert.True(parsed.IsHelp);
+        Assert.False(parsed.RunsService);
+        Assert.False(parsed.NeedsServices);
+        using var output = new StringWriter();
+        Assert.Equal(0, await parsed.RunAsync(null, output, TextWriter.Null));
+        Assert.NotEmpty(output.ToString().Trim());
+    }
+
     [Fact]
     public async Task Program_UnknownCommand_ExitsTwoWithHelpAndCreatesNoDatabase()
     {
