@@ -9,10 +9,9 @@ public class CommandTests
 {
     private static async Task<(int Exit, string Out, string Err)> RunAsync(CommunityLeadFactory app, params string[] args)
     {
-        var command = CommandLine.Find(args) ?? throw new InvalidOperationException($"no command {args[0]}");
         using var output = new StringWriter();
         using var error = new StringWriter();
-        var exit = await command.RunAsync(app.Services, output, error);
+        var exit = await CommandLine.RunAsync(args, app.Services, output, error);
         return (exit, output.ToString(), error.ToString());
     }
 

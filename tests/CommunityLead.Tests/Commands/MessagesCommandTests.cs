@@ -9,10 +9,9 @@ public class MessagesCommandTests
 {
     private static async Task<(int Exit, string Out, string Err)> RunAsync(CommunityLeadFactory app, params string[] args)
     {
-        var command = CommandLine.Find(args) ?? throw new InvalidOperationException($"no command {args[0]}");
         using var output = new StringWriter();
         using var error = new StringWriter();
-        var exit = await command.RunAsync(app.Services, output, error);
+        var exit = await CommandLine.RunAsync(args, app.Services, output, error);
         return (exit, output.ToString(), error.ToString());
     }
 
@@ -70,7 +69,7 @@ public class MessagesCommandTests
         using var app = new CommunityLeadFactory();
         var file = Path.Combine(Path.GetTempPath(), "cl-tests", Guid.NewGuid().ToString("N"), "none", "catalogue.csv");
         var (exit, _, error) = await RunAsync(app, "messages", "export", "--out", file);
-        Assert.Equal(CommandLine.UsageError, exit);
+        Assert.Equal(CommandLine.Failed, exit);
         Assert.Contains("Could not write", error);
         Assert.False(File.Exists(file));
     }

@@ -34,6 +34,7 @@ public static class LetterEndpoints
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         letters.MapGet("/{id:int}", LetterHandlers.Rerender).Produces(StatusCodes.Status200OK, contentType: "application/pdf")
             .ProducesProblem(StatusCodes.Status404NotFound);
-        letters.MapPost("/batch", LetterBatch.Create).Produces(StatusCodes.Status200OK, contentType: "application/zip");
+        letters.MapPost("/batch", LetterBatch.Create).Produces(StatusCodes.Status200OK, contentType: "application/zip")
+            .RequireRateLimiting(RateLimitSetup.LetterBatches).ProducesProblem(StatusCodes.Status429TooManyRequests);
     }
 }

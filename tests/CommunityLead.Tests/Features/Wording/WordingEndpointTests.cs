@@ -48,7 +48,7 @@ public class WordingEndpointTests
 
         using var output = new StringWriter();
         using var error = new StringWriter();
-        Assert.Equal(0, await CommandLine.Find(["messages", "export", "--format", "csv"])!.RunAsync(app.Services, output, error));
+        Assert.Equal(0, await CommandLine.RunAsync(["messages", "export", "--format", "csv"], app.Services, output, error));
         Assert.Equal(csv, output.ToString());
     }
 
