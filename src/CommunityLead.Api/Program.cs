@@ -8,38 +8,46 @@ using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Reports;
+using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
+using Microsoft.Extensions.Options;
+
+// Help and mistyped commands are answered before any setting is read or any database is touched.
+var commandLine = CommandLine.Parse(args);
+if (!commandLine.RunsService && !commandLine.NeedsServices) return await commandLine.RunAsync(null, Console.Out, Console.Error);
 
 // Settings files travel with the program, so it reads the same appsettings.json from whatever folder it runs in.
 var builder = WebApplication.CreateBuilder(new WebApplicationOptions { Args = args, ContentRootPath = AppContext.BaseDirectory });
-var command = CommandLine.Find(args);
-if (command is not null) CommandLine.QuietLogging(builder.Logging);
-builder.AddCommunityLead();
-var app = builder.Build();
-
-// Rule profiles are validated before anything else: a broken one stops the service, naming file and field.
+if (!commandLine.RunsService) CommandLine.QuietLogging(builder.Logging);
+WebApplication app;
 try
 {
+    builder.AddCommunityLead();
+    app = builder.Build();
+    // Every setting, then the rule profiles: a bad one stops the program here, named, before anything is served.
+    SettingsChecks.Validate(app.Services);
     app.Services.GetRequiredService<ProfileCatalog>();
 }
-catch (ProfileException e)
+catch (Exception e) when (e is SettingsException or ProfileException)
 {
     Console.Error.WriteLine(e.Message);
-    return 1;
+    return CommandLine.Failed;
 }
 
-if (command is not null) return await command.RunAsync(app.Services, Console.Out, Console.Error);
+if (!commandLine.RunsService) return await commandLine.RunAsync(app.Services, Console.Out, Console.Error);
 
-if (app.Configuration.GetValue("Database:MigrateOnStartup", true)) await StorageSetup.MigrateAsync(app.Services);
+if (app.Services.GetRequiredService<IOptions<DatabaseOptions>>().Value.MigrateOnStartup) await StorageSetup.MigrateAsync(app.Services);
 
+app.UseForwardedHeaders();
+app.UseSecurityHeaders();
 app.UseExceptionHandler();
 app.UseStatusCodePages();
 app.Use(NoNulText.InQueryAsync);
-app.UseSwagger();
-app.UseSwaggerUI();
+app.UseCommunityLeadSwagger();
 app.UseAuthentication();
 app.UseAuthorization();
+app.UseRateLimiter();
 
 app.MapHealth();
 app.MapHouseholds();
@@ -50,6 +58,7 @@ app.MapLetters();
 app.MapAttention();
 app.MapReports();
 app.MapAdmin();
+app.MapWording();
 
 await app.RunAsync();
 return 0;

@@ -49,6 +49,18 @@ public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock)
         return new Created(label, role, $"{Prefix}_{keyId}_{secret}");
     }
 
+    /// <summary>
+    /// The public id part of a presented key, when it has the shape of one (16 hex digits), for limits and logs;
+    /// never the secret. Anything else (a pasted password, text with line breaks) gives null, so it is never logged.
+    /// </summary>
+    public static string? KeyIdOf(string presented)
+    {
+        var parts = presented.Split('_');
+        return parts.Length == 3 && parts[0] == Prefix && parts[1].Length == KeyIdBytes * 2 && parts[1].All(char.IsAsciiHexDigitLower)
+            ? parts[1]
+            : null;
+    }
+
     public async Task<Verified?> VerifyAsync(string presented, CancellationToken ct = default)
     {
         var parts = presented.Split('_');

@@ -1,8 +1,10 @@
+using System.CommandLine;
+
 namespace CommunityLead.Api.Commands;
 
 /// <summary>
-/// The executable's commands (migrate, keys, demo, backup). Each runs on the configured database and
-/// exits; with no command the service starts. Errors go to standard error with a non-zero exit code.
+/// The executable's commands (serve, migrate, keys, demo, backup). Each runs on the configured database and
+/// exits; with no command, or <c>serve</c>, the service starts. Errors go to standard error with a non-zero exit code.
 /// </summary>
 public interface ICommand
 {
@@ -11,17 +13,24 @@ public interface ICommand
 
 public static class CommandLine
 {
+    /// <summary>The command could not do its work (a missing folder, an unreadable database).</summary>
+    public const int Failed = 1;
+
+    /// <summary>The arguments were wrong: an unknown command, a missing argument, a role that does not exist.</summary>
     public const int UsageError = 2;
 
-    public static ICommand? Find(string[] args) => args.FirstOrDefault() switch
+    /// <summary>Response files and bundled short options are off: an argument means what it says.</summary>
+    private static readonly ParserConfiguration Parser = new() { ResponseFileTokenReplacer = null, EnablePosixBundling = false };
+
+    public static ParsedCommandLine Parse(IReadOnlyList<string> args)
     {
-        "migrate" => new MigrateCommand(),
-        "keys" => new KeysCommand(args[1..]),
-        "demo" => new DemoCommand(),
-        "backup" => new BackupCommand(args[1..]),
-        "help" or "--help" => new HelpCommand(),
-        _ => null,
-    };
+        var tree = CommandTree.Build();
+        return new ParsedCommandLine(tree, tree.Root.Parse(args, Parser));
+    }
+
+    /// <summary>Parses and runs a command on services that already exist (the tests' way in).</summary>
+    public static Task<int> RunAsync(IReadOnlyList<string> args, IServiceProvider services, TextWriter output, TextWriter error) =>
+        Parse(args).RunAsync(services, output, error);
 
     /// <summary>Logs go to standard error so the last line of standard output stays the command's answer.</summary>
     public static void QuietLogging(ILoggingBuilder logging)
@@ -31,24 +40,68 @@ public static class CommandLine
         logging.SetMinimumLevel(LogLevel.Warning);
     }
 
-    public const string Usage = """
-        Usage: CommunityLead.Api [command]
-          (no command)                          run the service (--urls http://127.0.0.1:5020)
-          migrate                               create or upgrade the database, then exit
-          keys create --role R --label L        make an API key (roles: coordinator, lab, health, admin); printed once
-          keys list                             list keys (never their secrets)
-          keys revoke L                         revoke the key labelled L
-          demo                                  load the invented demo scenario from seed-data/ (safe to repeat)
-          backup FILE                           write a consistent copy of the database to FILE
-        The database is ConnectionStrings:CommunityLead (environment ConnectionStrings__CommunityLead).
-        """;
+    internal static void WriteHelp(RootCommand root, IEnumerable<string> commandPath, TextWriter to) =>
+        root.Parse([.. commandPath, "--help"], Parser).Invoke(new InvocationConfiguration { Output = to, Error = to });
 }
 
-internal sealed class HelpCommand : ICommand
+/// <summary>What the arguments ask for: the service, help, a command, or something this program does not know.</summary>
+public sealed class ParsedCommandLine
 {
-    public Task<int> RunAsync(IServiceProvider services, TextWriter output, TextWriter error)
+    private readonly CommandTree tree;
+    private readonly ParseResult result;
+
+    internal ParsedCommandLine(CommandTree tree, ParseResult result)
     {
-        output.WriteLine(CommandLine.Usage);
-        return Task.FromResult(0);
+        this.tree = tree;
+        this.result = result;
+        Problems = [.. result.Errors.Select(e => e.Message),
+            .. tree.TakesNoHostSettings(result.CommandResult.Command)
+                ? result.UnmatchedTokens.Select(t => $"Unrecognized command or argument '{t}'.")
+                : HostSwitches.Problems(result.UnmatchedTokens)];
+    }
+
+    /// <summary>Why the arguments were refused; empty when they were understood.</summary>
+    public IReadOnlyList<string> Problems { get; }
+
+    /// <summary>Help or the version: the 'help' command, or an option that answers by itself (--help, --version).</summary>
+    public bool IsHelp => Problems.Count == 0 && (tree.IsHelp(result.CommandResult.Command) || AnsweredByAnOption);
+
+    private bool AnsweredByAnOption => result.Action is { } action && action != result.CommandResult.Command.Action;
+
+    public bool RunsService => Problems.Count == 0 && !IsHelp && tree.IsService(result.CommandResult.Command);
+
+    /// <summary>A command that works on the database: it needs the program's services (settings, storage).</summary>
+    public bool NeedsServices => Problems.Count == 0 && !IsHelp && !RunsService;
+
+    /// <summary>
+    /// Help and refused arguments need no services (pass null): no setting is read and no database is touched.
+    /// </summary>
+    public async Task<int> RunAsync(IServiceProvider? services, TextWriter output, TextWriter error)
+    {
+        if (Problems.Count > 0)
+        {
+            foreach (var problem in Problems) error.WriteLine(problem);
+            error.WriteLine();
+            CommandLine.WriteHelp(tree.Root, Path(), error);
+            return CommandLine.UsageError;
+        }
+        if (IsHelp)
+        {
+            if (AnsweredByAnOption) return await result.InvokeAsync(new InvocationConfiguration { Output = output, Error = error });
+            CommandLine.WriteHelp(tree.Root, [], output);
+            return 0;
+        }
+        if (RunsService) throw new InvalidOperationException("The service is started by Program, not as a command.");
+        ArgumentNullException.ThrowIfNull(services);
+        return await tree.Work(result).RunAsync(services, output, error);
+    }
+
+    /// <summary>The names from the root down to the command that was reached ("keys create"), for its own help.</summary>
+    private List<string> Path()
+    {
+        var names = new List<string>();
+        for (var command = result.CommandResult; command.Parent is System.CommandLine.Parsing.CommandResult parent; command = parent)
+            names.Insert(0, command.Command.Name);
+        return names;
     }
 }

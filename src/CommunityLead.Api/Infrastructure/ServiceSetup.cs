@@ -1,11 +1,7 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Features.Interpretation;
-using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
-using CommunityLead.Api.Features.Letters.Composing;
 using CommunityLead.Api.Features.Letters.Layout;
-using CommunityLead.Api.Features.Reports;
-using CommunityLead.Rules.Sampling;
 using FluentValidation;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Http.Json;
@@ -19,14 +15,13 @@ public static class ServiceSetup
         var services = builder.Services;
         services.AddCommunityLeadStorage(builder.Configuration);
         services.AddSingleton(TimeProvider.System);
-        services.Configure<SamplingLimits>(builder.Configuration.GetSection("Sampling"));
-        services.Configure<LabIntakeOptions>(builder.Configuration.GetSection("LabIntake"));
-        services.Configure<InterpretationOptions>(builder.Configuration.GetSection("Interpretation"));
-        services.Configure<ReportOptions>(builder.Configuration.GetSection("Reports"));
+        services.AddCommunityLeadSettings(builder.Configuration);
         services.AddSingleton<ProfileCatalog>();
-        services.AddScoped<InterpretAfterResults>();
-        services.AddSingleton(builder.Configuration.GetSection("Letters").Get<LetterSettings>()
-            ?? throw new InvalidOperationException("The Letters settings (program name, contacts) are missing."));
+        services.AddScoped<InterpretWithResults>();
+        services.AddScoped<InterpretationRepair>();
+        // One instance, so tests (and nothing else) can also run a sweep by hand.
+        services.AddSingleton<InterpretationSweep>();
+        services.AddHostedService(sp => sp.GetRequiredService<InterpretationSweep>());
         services.AddSingleton<ILetterLayout, PdfLetterLayout>();
         services.AddScoped<LetterIssuing>();
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
@@ -37,6 +32,9 @@ public static class ServiceSetup
         services.AddValidatorsFromAssemblyContaining<Program>(ServiceLifetime.Singleton);
 
         services.AddScoped<ApiKeyService>();
+        services.AddSingleton<SignInThrottle>();
+        services.AddCommunityLeadRateLimits();
+        services.AddCommunityLeadForwarding();
         services.AddAuthentication(ApiKeyAuthenticationHandler.SchemeName)
             .AddScheme<AuthenticationSchemeOptions, ApiKeyAuthenticationHandler>(ApiKeyAuthenticationHandler.SchemeName, null);
         services.AddAuthorization(Policies.Add);

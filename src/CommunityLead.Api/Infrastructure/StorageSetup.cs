@@ -21,7 +21,7 @@ public static class StorageSetup
         if (string.IsNullOrWhiteSpace(name)) return StorageProvider.Sqlite;
         return Enum.TryParse<StorageProvider>(name, ignoreCase: true, out var provider) && Enum.IsDefined(provider)
             ? provider
-            : throw new InvalidOperationException($"Database:Provider is '{name}'; use Sqlite or Postgres.");
+            : throw new SettingsException($"Database:Provider must be Sqlite or Postgres; it is {name}.");
     }
 
     public static void AddCommunityLeadStorage(this IServiceCollection services, IConfiguration configuration)
@@ -30,7 +30,7 @@ public static class StorageSetup
         if (Provider(configuration) == StorageProvider.Postgres)
         {
             if (string.IsNullOrWhiteSpace(connectionString))
-                throw new InvalidOperationException("Database:Provider is Postgres, so ConnectionStrings:CommunityLead must name the server.");
+                throw new SettingsException("Database:Provider is Postgres, so ConnectionStrings:CommunityLead must name the server.");
             // Handlers ask for CommunityLeadDb and get the PostgreSQL-mapped model with its own migrations.
             services.AddDbContext<CommunityLeadDb, PostgresCommunityLeadDb>(o => o.UseNpgsql(connectionString));
             return;

@@ -55,4 +55,8 @@ public sealed record ValidityIssue(ValidityIssueCode Code, string Reason);
 public sealed record ProgramRules(
     double? AdvisoryLeadUgL = null,
     double UrgentLeadUgL = 50,
-    double PipeInnerDiameterMm = 19);
+    double PipeInnerDiameterMm = 19)
+{
+    /// <summary>Results to check with the lab before any letter.</summary>
+    public PlausibilityLimits Plausibility { get; init; } = new();
+}

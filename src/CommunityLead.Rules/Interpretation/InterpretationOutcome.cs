@@ -33,6 +33,8 @@ public enum AttentionFlag
 {
     // Declared most urgent first: the attention list sorts on this order.
     Urgent,
+    /// <summary>A result no tap or yard is likely to hold (a unit mix-up, swapped bottles): checked before any letter.</summary>
+    Implausible,
     ActionLevelVulnerableHome,
     ActionLevel,
     SuspectedServiceLine,
@@ -41,6 +43,9 @@ public enum AttentionFlag
 }
 
 /// <param name="LevelValue">The level the value was compared with, in <paramref name="Unit"/>; null when none applies.</param>
+/// <param name="ScreeningLevel">Soil: <paramref name="LevelValue"/> is a screening level, not a hazard standard.</param>
+/// <param name="HazardLevel">Soil: the hazard standard for the sample's place, also when the screening level decided
+/// (so a letter's scale can show both); null for water and where the profile has no hazard standard.</param>
 public sealed record Finding(
     BottleType Bottle,
     int? Position,
@@ -52,7 +57,9 @@ public sealed record Finding(
     Band Band,
     double? LevelValue,
     string? LevelMeaning,
-    SoilComparison? Soil = null);
+    SoilComparison? Soil = null,
+    bool ScreeningLevel = false,
+    double? HazardLevel = null);
 
 /// <summary>Where lead peaked in a sequential profile, and the length of pipe that much water fills.</summary>
 public sealed record SequentialPeak(int Position, double PeakValue, double LitresBeforePeak, double PipeMetres);
@@ -69,4 +76,11 @@ public sealed record Interpretation(
     SequentialPeak? Peak,
     IReadOnlyList<ValidityIssue> Validity,
     IReadOnlyList<Message> Messages,
-    IReadOnlyList<AttentionFlag> Flags);
+    IReadOnlyList<AttentionFlag> Flags)
+{
+    /// <summary>
+    /// Results to check with the lab before any letter, and why. Not a constructor parameter, so interpretations
+    /// stored before the check existed read back with none.
+    /// </summary>
+    public IReadOnlyList<ImplausibleResult> Implausible { get; init; } = [];
+}

@@ -11,12 +11,15 @@ public static partial class Interpreter
     /// an action level (lead, copper, or soil above its hazard level) raises one action flag: the vulnerable-home
     /// one where a child under 6 lives or someone is pregnant, the plain one otherwise; an urgent result raises
     /// Urgent as well. Service line suspected: the ServiceLineOrFurther pattern, a sequential peak after the first
-    /// liter, or a fifth liter above the first — each only with lead at the caution level or above.
+    /// liter, or a fifth liter above the first — each only with lead at the caution level or above. An implausible
+    /// result raises Implausible beside whatever its value raises: until the lab confirms it, it may be real.
     /// </summary>
-    private static IReadOnlyList<AttentionFlag> Flags(KitFacts kit, IReadOnlyList<Finding> findings, Band band, Sources sources)
+    private static IReadOnlyList<AttentionFlag> Flags(KitFacts kit, IReadOnlyList<Finding> findings, Band band, Sources sources,
+        bool implausible)
     {
         var flags = new SortedSet<AttentionFlag>();
         if (findings.Any(f => f.Band == Band.Urgent)) flags.Add(AttentionFlag.Urgent);
+        if (implausible) flags.Add(AttentionFlag.Implausible);
         if (findings.Any(f => f.Band is Band.Action or Band.Urgent))
             flags.Add(IsVulnerable(kit.Household) ? AttentionFlag.ActionLevelVulnerableHome : AttentionFlag.ActionLevel);
         if (SuspectServiceLine(findings, sources)) flags.Add(AttentionFlag.SuspectedServiceLine);

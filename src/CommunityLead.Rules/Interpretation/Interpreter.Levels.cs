@@ -44,10 +44,21 @@ public static partial class Interpreter
         /// A sample with no place recorded is judged as a play area, the strictest place, since children may
         /// play anywhere.
         /// </summary>
-        public ProfileLevel? Soil(Analyte analyte, SoilLocation? location, bool otherLeadSource)
+        public ProfileLevel? Soil(Analyte analyte, SoilLocation? location, bool otherLeadSource) =>
+            SoilOfKind(LevelKind.SoilLevel, analyte, location, otherLeadSource);
+
+        /// <summary>
+        /// The soil screening level (a soil level of kind Advisory, such as EPA's 2024 residential 200 mg/kg, or
+        /// 100 mg/kg with another lead source): stricter than the hazard standards and judged beside them, so a
+        /// result under the hazard standard but over the screening level is not called low.
+        /// </summary>
+        public ProfileLevel? SoilScreening(Analyte analyte, SoilLocation? location, bool otherLeadSource) =>
+            SoilOfKind(LevelKind.Advisory, analyte, location, otherLeadSource);
+
+        private ProfileLevel? SoilOfKind(LevelKind kind, Analyte analyte, SoilLocation? location, bool otherLeadSource)
         {
             var place = location ?? SoilLocation.PlayArea;
-            return InEffect(analyte, Matrix.Soil, LevelKind.SoilLevel)
+            return InEffect(analyte, Matrix.Soil, kind)
                 .Where(l => l.AppliesTo is not { Count: > 0 } || l.AppliesTo.Contains(place))
                 .Where(l => !l.OnlyWithOtherLeadSource || otherLeadSource)
                 .MinBy(l => l.Value);

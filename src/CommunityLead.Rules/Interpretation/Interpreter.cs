@@ -31,11 +31,15 @@ public static partial class Interpreter
         // keep their own bands for the coordinator.
         var band = validity.Count > 0 ? Band.Retest : findings.Max(f => f.Band);
         var sources = Sources.Find(kit, findings, levels, program);
-        var flags = Flags(kit, findings, band, sources);
+        var implausible = Implausible(findings, levels, program.Plausibility);
+        var flags = Flags(kit, findings, band, sources, implausible.Count > 0);
         var messages = kit.Kind == KitKind.Soil
             ? SoilLetter(kit, judged, band, validity)
             : WaterLetter(kit, judged, band, validity, sources);
-        return new Interpretation(band, profile.Id, profile.Version, findings, sources.Pattern, sources.Peak, validity, messages, flags);
+        return new Interpretation(band, profile.Id, profile.Version, findings, sources.Pattern, sources.Peak, validity, messages, flags)
+        {
+            Implausible = implausible,
+        };
     }
 
     /// <summary>Letter order: first liter, fifth liter, flushed, the sequential bottles, soil.</summary>
@@ -56,11 +60,17 @@ public static partial class Interpreter
         findings.Any(f => f.Analyte == Analyte.Lead && !f.BelowReportingLimit);
 
     /// <summary>A finding plus what its message needs beyond the Finding record.</summary>
+    /// <param name="Urgent">Lead in water: the program's urgent level, named beside the action level in an urgent line.</param>
+    /// <param name="Hazard">Soil: the hazard standard for the sample's place, named beside a screening level it exceeds.</param>
+    /// <param name="Screening">Soil: the finding was judged against the screening level, not the hazard standard.</param>
     private sealed record Judged(
         Finding Finding,
         double ReportingLimit,
         double? ActionLevel = null,
         bool Taste = false,
         double? Margin = null,
-        bool OtherSourceLevel = false);
+        bool OtherSourceLevel = false,
+        double? Urgent = null,
+        double? Hazard = null,
+        bool Screening = false);
 }

@@ -2,7 +2,8 @@ namespace CommunityLead.Rules.Reading;
 
 /// <summary>
 /// Counts English syllables by rule, the usual way readability tools do; no dictionary. A word as written is
-/// cut into runs of letters and runs of digits, and the runs are counted and added up ("blue-green" = 1 + 1):
+/// cut into runs of letters and runs of digits (<see cref="WordRuns"/>), and the runs are counted and added up
+/// ("blue-green" = 1 + 1):
 /// - Letters with a vowel (a e i o u, and y except at the start of a run): one syllable per group of vowels
 ///   next to each other ("water" wa·ter = 2, "lead" = 1), then these endings, each taken off only when the word
 ///   would keep at least one syllable:
@@ -22,33 +23,7 @@ namespace CommunityLead.Rules.Reading;
 /// </summary>
 internal static class EnglishSyllables
 {
-    public static int OfToken(string token)
-    {
-        var total = 0;
-        var i = 0;
-        while (i < token.Length)
-        {
-            var start = i;
-            if (char.IsLetter(token[i]))
-            {
-                while (i < token.Length && (char.IsLetter(token[i]) || token[i] is '\'' or '’')) i++;
-                total += OfLetters(token[start..i].Replace("'", "").Replace("’", "").ToLowerInvariant());
-            }
-            else if (char.IsDigit(token[i]))
-            {
-                while (i < token.Length && (char.IsDigit(token[i]) || IsInsideNumber(token, i))) i++;
-                total += OfNumber(token[start..i]);
-            }
-            else i++;
-        }
-        return Math.Max(1, total);
-    }
-
-    private static bool IsInsideNumber(string token, int i) =>
-        token[i] is '.' or ',' && i + 1 < token.Length && char.IsDigit(token[i + 1]);
-
-    private static int OfNumber(string number) =>
-        number.Count(char.IsDigit) + number.Count(c => c == '.');
+    public static int OfToken(string token) => WordRuns.Syllables(token, OfLetters);
 
     private static int OfLetters(string w)
     {

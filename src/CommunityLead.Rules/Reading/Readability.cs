@@ -36,7 +36,10 @@ public static class Readability
     /// <summary>Syllables of one word as written (see <see cref="EnglishSyllables"/> for the rules).</summary>
     public static int CountSyllables(string word) => EnglishSyllables.OfToken(word);
 
-    public static TextCounts Count(string text)
+    public static TextCounts Count(string text) => Count(text, EnglishSyllables.OfToken);
+
+    /// <summary>The same cutting into sentences and words for any language; only the syllable rules differ.</summary>
+    internal static TextCounts Count(string text, Func<string, int> syllablesOf)
     {
         int sentences = 0, words = 0, syllables = 0;
         var openSentence = false;
@@ -45,7 +48,7 @@ public static class Readability
             var word = piece.Trim(EdgePunctuation);
             if (word.Length == 0 || !word.Any(char.IsLetterOrDigit)) continue;
             words++;
-            syllables += EnglishSyllables.OfToken(word);
+            syllables += syllablesOf(word);
             openSentence = true;
             if (EndsSentence(piece))
             {

@@ -80,6 +80,7 @@ public static class RouteTable
 
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["GET /api/admin/audit"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/audit?pageSize=10")),
+        ["GET /api/admin/messages"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/messages?format=csv")),
     };
 
     private static RouteExpectation Coordinator(HttpStatusCode designed, Func<RouteSetup, Task<HttpRequestMessage>> prepare) =>

@@ -31,7 +31,7 @@ public class BackupUnderWritesTests
         var before = Volatile.Read(ref committed);
         var target = Path.Combine(Path.GetDirectoryName(app.DatabaseFile)!, "during-writes.db");
         using var output = new StringWriter();
-        Assert.Equal(0, await CommandLine.Find(["backup", target])!.RunAsync(app.Services, output, TextWriter.Null));
+        Assert.Equal(0, await CommandLine.RunAsync(["backup", target], app.Services, output, TextWriter.Null));
         await stop.CancelAsync();
         await writer;
 

@@ -9,10 +9,9 @@ public class CommandTests
 {
     private static async Task<(int Exit, string Out, string Err)> RunAsync(CommunityLeadFactory app, params string[] args)
     {
-        var command = CommandLine.Find(args) ?? throw new InvalidOperationException($"no command {args[0]}");
         using var output = new StringWriter();
         using var error = new StringWriter();
-        var exit = await command.RunAsync(app.Services, output, error);
+        var exit = await CommandLine.RunAsync(args, app.Services, output, error);
         return (exit, output.ToString(), error.ToString());
     }
 
@@ -87,6 +86,13 @@ public class CommandTests
         Assert.True(app.WithDb(db => db.Interpretations.Count()) >= 100);
         Assert.True(app.WithDb(db => db.Letters.Count(l => l.SentAtUtc != null)) >= 20);
         Assert.True(app.WithDb(db => db.Attention.Any(a => a.Reason == CommunityLead.Rules.Interpretation.AttentionFlag.Urgent)));
+        // Urgent letters went out only after the demo's coordinator resolved their items (the release gate), before sending.
+        var released = app.WithDb(db => db.Letters.Where(l => l.SentAtUtc != null && l.ReleasedBy != null)
+            .Select(l => new { l.ReleasedBy, l.ReleasedAtUtc, l.SentAtUtc }).ToList());
+        Assert.NotEmpty(released);
+        Assert.All(released, l => Assert.True(l.ReleasedBy == "demo-loader" && l.ReleasedAtUtc < l.SentAtUtc));
+        Assert.False(app.WithDb(db => db.Letters.Any(l => l.SentAtUtc != null && l.ReleasedBy == null
+            && db.Attention.Any(a => a.InterpretationId == l.InterpretationId && a.Reason == CommunityLead.Rules.Interpretation.AttentionFlag.Urgent))));
         var letters = app.WithDb(db => db.Letters.Count());
 
         var second = await RunAsync(app, "demo");

@@ -5,6 +5,7 @@ using CommunityLead.Api.Features.Attention;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
+using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
@@ -94,7 +95,7 @@ internal static class ColumnDecisions
             nameof(ProfileValidationTests.Read_IdLongerThanItsColumn_IsRefused)),
         new Bounded("KitInterpretation.CreatedBy", 100, "an actor's label", ActorLabel),
         new Bounded("AttentionItem.KitCode", 16, "a kit's code", () => MaxLength("Kit.Code")),
-        new Composed("AttentionItem.Detail", 500, "AttentionText: a sentence with one figure, or retest reasons cut to fit; or a batch id (64)",
+        new Composed("AttentionItem.Detail", 500, "AttentionText: a sentence with one figure, or retest or implausible-result reasons cut to fit; or a batch id (64)",
             nameof(AttentionTextTests.AttentionText_WorstCases_FitTheDetailColumn)),
         new Bounded("AttentionItem.ResolvedBy", 100, "an actor's label", ActorLabel),
         new Validated("AttentionItem.ResolutionNote", 500, $"{nameof(ResolveValidator)} (else a fixed sentence)",
@@ -104,7 +105,7 @@ internal static class ColumnDecisions
         new Bounded("IssuedLetter.Sha256", 64, "SHA-256 in hex", () => SHA256.HashSizeInBytes * 2),
         new Bounded("IssuedLetter.IssuedBy", 100, "an actor's label", ActorLabel),
         new Bounded("IssuedLetter.SentBy", 100, "an actor's label", ActorLabel),
-        new Bounded("IssuedLetter.CatalogVersion", 20, "the message catalogue's version", () => MessageCatalog.VersionLength),
+        new Bounded("IssuedLetter.CatalogVersion", 20, "the wording catalogue's version (messages and letter words)", () => WordingCatalogue.Version.Length),
         new Bounded("IssuedLetter.ReleasedBy", 100, "an actor's label", ActorLabel),
 
         // Keys and the audit trail.

@@ -120,6 +120,38 @@ public class ComposeFileTests
     }
 
     [Fact]
+    public void Compose_ServiceInstances_BelieveForwardedHeadersFromAPrivateNetworkOnly()
+    {
+        // Sign-in limits count the client's address: behind the balancer it must come from X-Forwarded-For,
+        // believed from the Docker network only, never from everyone.
+        var services = Compose.Services.Where(s => s.Dockerfile == "deploy/Dockerfile").ToList();
+        Assert.Equal(3, services.Count);
+        foreach (var service in services)
+        {
+            var network = System.Net.IPNetwork.Parse(service.Environment["ForwardedHeaders__KnownNetworks__0"]);
+            // RFC 1918 §3: 172.16.0.0/12 is private address space.
+            Assert.True(System.Net.IPNetwork.Parse("172.16.0.0/12").Contains(network.BaseAddress) && network.PrefixLength >= 12,
+                $"{service.Name} trusts {network}");
+        }
+    }
+
+    [Fact]
+    public void Compose_Balancer_PassesOnTheSchemeOfATlsProxyInFront()
+    {
+        var (source, _) = Assert.Single(Balancer.Volumes);
+        var config = File.ReadAllText(RepoFiles.PathOf(source));
+        var proto = Regex.Match(config, @"proxy_set_header\s+X-Forwarded-Proto\s+\$(\w+)\s*;");
+        Assert.True(proto.Success, "X-Forwarded-Proto");
+        // The balancer's own $scheme is always http (it listens on port 80) and would hide a TLS proxy's https:
+        // the header sent on is the incoming one, or $scheme when there is none.
+        var map = Regex.Match(config, @"map\s+\$http_x_forwarded_proto\s+\$(\w+)\s*\{([^}]*)\}");
+        Assert.True(map.Success, "map $http_x_forwarded_proto");
+        Assert.Equal(proto.Groups[1].Value, map.Groups[1].Value);
+        Assert.Matches(@"default\s+\$http_x_forwarded_proto\s*;", map.Groups[2].Value);
+        Assert.Matches(@"""""\s+\$scheme\s*;", map.Groups[2].Value);
+    }
+
+    [Fact]
     public void Compose_NamedVolumes_AreAllDeclaredAtTheTopLevel()
     {
         var used = Compose.Services.SelectMany(s => s.NamedVolumes).Select(v => v.Source).ToList();

@@ -36,6 +36,8 @@ public class ImageRunTests
         http.DefaultRequestHeaders.Authorization = new AuthenticationHeaderValue("Bearer", key);
         Assert.Equal(HttpStatusCode.OK, (await http.GetAsync("/api/kits")).StatusCode);
         Assert.Contains("Hosting environment: Production", service.Output);
+        // Swagger UI is off in the image (deploy/README.md).
+        Assert.Equal(HttpStatusCode.NotFound, (await http.GetAsync("/swagger/index.html")).StatusCode);
 
         service.Dispose();
         Assert.NotEqual(0, await image.ShellAsync(healthcheck)); // the check notices a stopped service

@@ -19,12 +19,15 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
     private readonly string folder = Path.Combine(Path.GetTempPath(), "cl-tests", Guid.NewGuid().ToString("N"));
 
     private readonly bool ownsDatabase;
+    private readonly Action<IServiceCollection>? extraServices;
 
     /// <param name="now">The test clock's start.</param>
     /// <param name="sharedConnectionString">Another instance's database (a second service instance on the same
     /// store); this factory then leaves it in place when disposed.</param>
-    public CommunityLeadFactory(DateTimeOffset? now = null, string? sharedConnectionString = null)
+    /// <param name="services">Test-only services added after the service's own (a log capture, a save interceptor).</param>
+    public CommunityLeadFactory(DateTimeOffset? now = null, string? sharedConnectionString = null, Action<IServiceCollection>? services = null)
     {
+        extraServices = services;
         Clock = new TestClock(now ?? new DateTimeOffset(2026, 4, 10, 12, 0, 0, TimeSpan.Zero));
         ownsDatabase = sharedConnectionString is null;
         ConnectionString = sharedConnectionString
@@ -35,6 +38,22 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
 
     /// <summary>Every error the service logged, for tests that assert a start or a request was clean.</summary>
     public ErrorLog Errors { get; } = new();
+
+    /// <summary>Every warning and error, for tests of what the service logs.</summary>
+    public ErrorLog Warnings { get; } = new(LogLevel.Warning);
+
+    /// <summary>
+    /// Settings of this test's service, applied over appsettings.json; a test sets its own before first use
+    /// (<c>new CommunityLeadFactory { Settings = { ["RateLimits:LabBatchesPerKey"] = "2" } }</c>). The rate limits
+    /// are raised by default: a test makes many requests with one key from one address, faster than any client.
+    /// </summary>
+    public Dictionary<string, string?> Settings { get; } = new()
+    {
+        ["RateLimits:FailedSignInsPerAddress"] = "100000",
+        ["RateLimits:FailedSignInsPerKeyId"] = "100000",
+        ["RateLimits:LabBatchesPerKey"] = "100000",
+        ["RateLimits:LetterBatchesPerKey"] = "100000",
+    };
     public string DatabaseFile => Path.Combine(folder, "test.db");
     public string ConnectionString { get; }
 
@@ -44,11 +63,17 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
         builder.UseEnvironment("Testing");
         builder.UseSetting("ConnectionStrings:CommunityLead", ConnectionString);
         builder.UseSetting("Database:Provider", TestStore.IsPostgres ? "Postgres" : "Sqlite");
-        builder.ConfigureLogging(logging => logging.AddProvider(Errors));
+        foreach (var (name, value) in Settings) builder.UseSetting(name, value);
+        builder.ConfigureLogging(logging =>
+        {
+            logging.AddProvider(Errors);
+            logging.AddProvider(Warnings);
+        });
         builder.ConfigureServices(services =>
         {
             services.RemoveAll<TimeProvider>();
             services.AddSingleton<TimeProvider>(Clock);
+            extraServices?.Invoke(services);
         });
     }
 
@@ -92,21 +117,21 @@ public sealed class TestClock(DateTimeOffset now) : TimeProvider
     public override DateTimeOffset GetUtcNow() => Now.ToUniversalTime();
 }
 
-/// <summary>Keeps the messages of log entries at Error or above.</summary>
-public sealed class ErrorLog : ILoggerProvider
+/// <summary>Keeps the messages of log entries at Error (or the level given) or above.</summary>
+public sealed class ErrorLog(LogLevel minimum = LogLevel.Error) : ILoggerProvider
 {
     private readonly System.Collections.Concurrent.ConcurrentQueue<string> entries = new();
 
     public IReadOnlyList<string> Entries => [.. entries];
 
-    public ILogger CreateLogger(string categoryName) => new Logger(categoryName, entries);
+    public ILogger CreateLogger(string categoryName) => new Logger(categoryName, entries, minimum);
 
     public void Dispose() { }
 
-    private sealed class Logger(string category, System.Collections.Concurrent.ConcurrentQueue<string> entries) : ILogger
+    private sealed class Logger(string category, System.Collections.Concurrent.ConcurrentQueue<string> entries, LogLevel minimum) : ILogger
     {
         public IDisposable? BeginScope<TState>(TState state) where TState : notnull => null;
-        public bool IsEnabled(LogLevel logLevel) => logLevel >= LogLevel.Error;
+        public bool IsEnabled(LogLevel logLevel) => logLevel >= minimum;
         public void Log<TState>(LogLevel logLevel, EventId eventId, TState state, Exception? exception, Func<TState, Exception?, string> formatter)
         {
             if (IsEnabled(logLevel)) entries.Enqueue($"{category}: {formatter(state, exception)}");

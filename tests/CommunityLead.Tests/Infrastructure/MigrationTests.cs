@@ -61,4 +61,49 @@ public class MigrationUpgradeTests
             Directory.Delete(folder, recursive: true);
         }
     }
+
+    [SqliteFact]
+    public void AttentionItemInterpretation_OnADatabaseWithItems_RanksImplausibleAfterUrgentAndLinksItemsToTheirInterpretation()
+    {
+        var folder = Directory.CreateTempSubdirectory("cl-upgrade").FullName;
+        try
+        {
+            var options = new DbContextOptionsBuilder<CommunityLeadDb>().UseSqlite($"Data Source={Path.Combine(folder, "old.db")}").Options;
+            using (var db = new CommunityLeadDb(options))
+            {
+                db.GetService<IMigrator>().Migrate("LetterReleaseAndCatalog");
+                db.Database.OpenConnection();
+                db.Database.ExecuteSqlRaw("PRAGMA foreign_keys = OFF");
+                // Kit 1 interpreted twice; its urgent item came with the second interpretation (same time), as did the
+                // action-level one. A lab correction's item has no interpretation behind it.
+                foreach (var (id, at) in new[] { (1, "2026-04-05 10:00:00"), (2, "2026-04-06 09:30:00") })
+                    db.Database.ExecuteSql($"""
+                        INSERT INTO "Interpretations" ("Id", "KitId", "KitCode", "Band", "ProfileId", "ProfileVersion", "OutcomeJson",
+                            "CreatedAtUtc", "CreatedBy")
+                        VALUES ({id}, 1, 'K', 'Urgent', 'us-lcri', 1, '[]', {at}, 'lab')
+                        """);
+                foreach (var (reason, priority, at) in new[]
+                {
+                    ("Urgent", 0, "2026-04-06 09:30:00"), ("ActionLevel", 2, "2026-04-06 09:30:00"),
+                    ("CorrectedAfterLetter", 5, "2026-04-06 09:30:00"),
+                })
+                    db.Database.ExecuteSql($"""
+                        INSERT INTO "Attention" ("KitId", "KitCode", "Reason", "Priority", "Detail", "RaisedAtUtc")
+                        VALUES (1, 'K', {reason}, {priority}, 'detail', {at})
+                        """);
+                db.Database.CloseConnection();
+            }
+            using (var db = new CommunityLeadDb(options))
+            {
+                db.Database.Migrate();
+                var items = db.Attention.OrderBy(a => a.Id).Select(a => new { a.Priority, a.InterpretationId }).ToList();
+                Assert.Equal([(0, (int?)2), (3, 2), (6, null)], items.Select(a => (a.Priority, a.InterpretationId)));
+            }
+        }
+        finally
+        {
+            Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
+            Directory.Delete(folder, recursive: true);
+        }
+    }
 }

@@ -61,7 +61,7 @@ public class StorageTests
     [Fact]
     public async Task Service_HealthAndSwagger_OpenWithoutAKey()
     {
-        using var app = new CommunityLeadFactory();
+        using var app = new CommunityLeadFactory { Settings = { ["Swagger:Enabled"] = "true" } };
         var anonymous = app.CreateClient();
         Assert.Equal(HttpStatusCode.OK, (await anonymous.GetAsync("/health")).StatusCode);
         var swagger = await anonymous.GetStringAsync("/swagger/v1/swagger.json");

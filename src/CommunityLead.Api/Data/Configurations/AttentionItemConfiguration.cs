@@ -16,5 +16,6 @@ public class AttentionItemConfiguration : IEntityTypeConfiguration<AttentionItem
         b.Property(a => a.ResolvedAtUtc).IsConcurrencyToken();
         b.HasIndex(a => new { a.ResolvedAtUtc, a.Priority, a.RaisedAtUtc });
         b.HasOne<Kit>().WithMany().HasForeignKey(a => a.KitId).OnDelete(DeleteBehavior.Restrict);
+        b.HasOne(a => a.Interpretation).WithMany().HasForeignKey(a => a.InterpretationId).OnDelete(DeleteBehavior.Restrict);
     }
 }

@@ -22,9 +22,18 @@ public class AttentionItem
     public DateTime? ResolvedAtUtc { get; set; }
     public string? ResolvedBy { get; set; }
     public string? ResolutionNote { get; set; }
+    /// <summary>
+    /// The interpretation that raised it; null for items raised by a lab correction. The urgent and implausible
+    /// items of a kit's current interpretation hold its letter back until resolved (LetterRelease).
+    /// </summary>
+    public int? InterpretationId { get; set; }
+    public KitInterpretation? Interpretation { get; set; }
 
-    public static AttentionItem Raise(int kitId, string kitCode, AttentionFlag flag, string detail, DateTime nowUtc) => new()
+    /// <param name="interpretation">The interpretation raising it, saved in the same unit of work.</param>
+    public static AttentionItem Raise(int kitId, string kitCode, AttentionFlag flag, string detail, DateTime nowUtc,
+        KitInterpretation? interpretation = null) => new()
     {
         KitId = kitId, KitCode = kitCode, Reason = flag, Priority = (int)flag, Detail = detail, RaisedAtUtc = nowUtc,
+        Interpretation = interpretation,
     };
 }

@@ -29,7 +29,10 @@ public class IssuedLetter
     public string? SentBy { get; set; }
     /// <summary>Days from collection to the confirmed sending (the LCRI asks utilities for 3 business days).</summary>
     public int? DaysFromCollection { get; set; }
-    /// <summary>The message catalogue version the wording came from, so a medical advisor can see what was approved.</summary>
+    /// <summary>
+    /// The wording catalogue version the letter was written with (messages and the letter's own words:
+    /// WordingCatalogue.Version, the one `messages export` prints), so a medical advisor can see what was approved.
+    /// </summary>
     public string? CatalogVersion { get; set; }
     /// <summary>
     /// For a result that needed a person first (urgent or implausible): the coordinator who checked it and called

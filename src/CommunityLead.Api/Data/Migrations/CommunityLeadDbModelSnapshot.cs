@@ -75,6 +75,9 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasMaxLength(500)
                         .HasColumnType("TEXT");
 
+                    b.Property<int?>("InterpretationId")
+                        .HasColumnType("INTEGER");
+
                     b.Property<string>("KitCode")
                         .IsRequired()
                         .HasMaxLength(16)
@@ -107,6 +110,8 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasColumnType("TEXT");
 
                     b.HasKey("Id");
+
+                    b.HasIndex("InterpretationId");
 
                     b.HasIndex("KitId");
 
@@ -836,11 +841,18 @@ namespace CommunityLead.Api.Data.Migrations
 
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.AttentionItem", b =>
                 {
+                    b.HasOne("CommunityLead.Api.Data.Entities.KitInterpretation", "Interpretation")
+                        .WithMany()
+                        .HasForeignKey("InterpretationId")
+                        .OnDelete(DeleteBehavior.Restrict);
+
                     b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
                         .WithMany()
                         .HasForeignKey("KitId")
                         .OnDelete(DeleteBehavior.Restrict)
                         .IsRequired();
+
+                    b.Navigation("Interpretation");
                 });
 
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Collection", b =>

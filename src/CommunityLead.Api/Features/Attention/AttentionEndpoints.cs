@@ -16,6 +16,7 @@ public static class AttentionEndpoints
 {
     // GET  /api/attention                 kits needing a person, most urgent first     coordinator
     // POST /api/attention/{id}/resolve    done, with a note (e.g. "called, filter given")  coordinator
+    //                                     (for urgent and implausible items: releases the kit's letter)
     public static void MapAttention(this IEndpointRouteBuilder app)
     {
         var group = app.MapGroup("/api/attention").WithTags("Attention")
@@ -40,12 +41,7 @@ public static class AttentionEndpoints
         if (item.ResolvedAtUtc is not null)
             return TypedResults.Problem(statusCode: 409, title: "Already resolved.",
                 detail: $"Resolved by {item.ResolvedBy}: {item.ResolutionNote}");
-        var actor = Actor.From(http.User);
-        item.ResolvedAtUtc = clock.GetUtcNow().UtcDateTime;
-        item.ResolvedBy = actor.Label;
-        item.ResolutionNote = request.Note!.Trim();
-        db.AuditTrail.Add(Audit.Kit(actor, item.ResolvedAtUtc.Value, item.KitCode, "resolve-attention",
-            reason: item.ResolutionNote, detail: KebabEnum.Name(item.Reason)));
+        AttentionResolving.Resolve(db, item, Actor.From(http.User), clock.GetUtcNow().UtcDateTime, request.Note!);
         try
         {
             await db.SaveChangesAsync(ct);

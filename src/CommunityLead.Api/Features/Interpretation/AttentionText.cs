@@ -11,27 +11,33 @@ public static class AttentionText
 {
     public static string For(AttentionFlag flag, KitOutcome outcome) => flag switch
     {
-        AttentionFlag.Urgent => $"Urgent result ({Worst(outcome)}): call the household now.",
+        AttentionFlag.Urgent => $"Urgent result ({Worst(outcome)}): call the household now. {HeldLetter}",
+        AttentionFlag.Implausible => Fit(ImplausibleText.All(outcome.Implausible), "", HeldLetter),
         AttentionFlag.ActionLevelVulnerableHome =>
             $"At or above the action level ({Worst(outcome)}) in a home with a child under 6 or a pregnancy: call first and offer help.",
         AttentionFlag.ActionLevel => $"At or above the action level ({Worst(outcome)}): call and offer help.",
         AttentionFlag.SuspectedServiceLine => "Lead points to the service line or pipes further out: tell the household and the utility.",
-        AttentionFlag.RetestNeeded => Retest([.. outcome.Validity.Select(v => v.Reason).Distinct()]),
+        AttentionFlag.RetestNeeded => Fit([.. outcome.Validity.Select(v => v.Reason).Distinct()], "The sample needs to be taken again:", ""),
         _ => "Corrected result after the letter: a new letter is needed.",
     };
+
+    /// <summary>Said on the items that hold a letter back (LetterRelease): resolving them is what releases it.</summary>
+    public const string HeldLetter = "The letter waits until this item is resolved with a note.";
 
     /// <summary>
     /// Every reason while the line has room. A sequential kit can carry a reason per bottle (30 of them), more
     /// than the stored line holds; the rest are counted, and the kit's interpretation lists them all. One reason
-    /// always fits: each is a stored collection flag (300 characters at most) or a fixed sentence.
+    /// always fits: each is a stored collection flag (300 characters at most) or a sentence of our own with a
+    /// figure or two in it.
     /// </summary>
-    private static string Retest(IReadOnlyList<string> reasons)
+    private static string Fit(IReadOnlyList<string> reasons, string opening, string closing)
     {
         string Line(int shown)
         {
-            var text = string.Join(" ", reasons.Take(shown).Prepend("The sample needs to be taken again:"));
+            var text = string.Join(" ", reasons.Take(shown).Prepend(opening).Where(t => t.Length > 0));
             var more = reasons.Count - shown;
-            return more == 0 ? text : $"{text} (And {more} more on the kit's interpretation.)";
+            text = more == 0 ? text : $"{text} (And {more} more on the kit's interpretation.)";
+            return closing.Length == 0 ? text : $"{text} {closing}";
         }
         var shown = reasons.Count;
         while (shown > 1 && Line(shown).Length > AttentionItem.DetailMaxLength) shown--;

@@ -65,5 +65,5 @@ public static class InterpretationEndpoints
     }
 
     private static InterpretationResponse Response(string code, KitOutcome o, ProfileRef profile, DateTime? at, bool provisional) =>
-        new(code, o.Band, profile, o.Findings, o.Messages, o.Flags, o.Pattern, o.Peak, o.Validity, at, provisional);
+        new(code, o.Band, profile, o.Findings, o.Messages, o.Flags, o.Pattern, o.Peak, o.Validity, at, provisional, o.Implausible);
 }

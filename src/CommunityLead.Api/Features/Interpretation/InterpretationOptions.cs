@@ -18,6 +18,13 @@ public sealed class InterpretationOptions
     public double UrgentLeadUgL { get; set; } = 50;
     /// <summary>Inner diameter assumed when turning a sequential profile's volume into pipe length (19 mm = ¾ in).</summary>
     public double PipeInnerDiameterMm { get; set; } = 19;
+    /// <summary>
+    /// How often each instance looks for kits whose results are in but not interpreted (also once at start-up);
+    /// zero or less: at start-up only. Cheap: it reads analyzed kits by index and batches of the last interval.
+    /// </summary>
+    public TimeSpan SweepInterval { get; set; } = TimeSpan.FromMinutes(5);
+    /// <summary>"Interpretation:Plausibility": results checked with the lab before any letter (defaults and their sources beside them).</summary>
+    public PlausibilityLimits Plausibility { get; set; } = new();
 
-    public ProgramRules ProgramRules => new(AdvisoryLeadUgL, UrgentLeadUgL, PipeInnerDiameterMm);
+    public ProgramRules ProgramRules => new(AdvisoryLeadUgL, UrgentLeadUgL, PipeInnerDiameterMm) { Plausibility = Plausibility };
 }

@@ -6,7 +6,8 @@ public sealed record ProfileRef(string Id, int Version);
 
 /// <summary>
 /// What a kit's results mean. <see cref="Provisional"/> is true when nothing is stored yet (for example the
-/// results are held by QC): shown to the coordinator, never sent to the household.
+/// results are held by QC): shown to the coordinator, never sent to the household. <see cref="Implausible"/>: results
+/// to check with the lab before any letter.
 /// </summary>
 public sealed record InterpretationResponse(
     string KitCode,
@@ -19,4 +20,5 @@ public sealed record InterpretationResponse(
     SequentialPeak? Peak,
     IReadOnlyList<ValidityIssue> Validity,
     DateTime? InterpretedAt,
-    bool Provisional);
+    bool Provisional,
+    IReadOnlyList<ImplausibleResult> Implausible);

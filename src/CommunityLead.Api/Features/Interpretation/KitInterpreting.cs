@@ -45,16 +45,17 @@ public static class KitInterpreting
             var profile = catalog.For(kit.Kind);
             var outcome = Interpreter.Interpret(facts[kit.Id], profile, catalog.ProgramRules);
             outcomes[kit.Id] = outcome;
-            db.Interpretations.Add(new KitInterpretation
+            var stored = new KitInterpretation
             {
                 KitId = kit.Id, KitCode = kit.Code, Band = outcome.Band, ProfileId = profile.Id, ProfileVersion = profile.Version,
                 OutcomeJson = JsonSerializer.Serialize(outcome, json), CreatedAtUtc = nowUtc, CreatedBy = actor.Label,
-            });
+            };
+            db.Interpretations.Add(stored);
             (kit.Band, kit.LeadBand, kit.CopperBand) = (outcome.Band, BandOf(outcome, Analyte.Lead), BandOf(outcome, Analyte.Copper));
             KitTransitions.Apply(db, kit, KitAction.Interpret, actor, nowUtc,
                 detail: $"band {KebabEnum.Name(outcome.Band)}, profile {profile.Id} v{profile.Version}");
             foreach (var flag in outcome.Flags.Where(f => f != AttentionFlag.CorrectedAfterLetter))
-                db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, flag, AttentionText.For(flag, outcome), nowUtc));
+                db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, flag, AttentionText.For(flag, outcome), nowUtc, stored));
         }
         return outcomes;
     }

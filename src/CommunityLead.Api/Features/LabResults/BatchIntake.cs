@@ -24,7 +24,7 @@ public static class BatchIntake
 {
     public static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> Post(
         HttpContext http, CommunityLeadDb db, IOptions<LabIntakeOptions> settings, IOptions<JsonOptions> json,
-        TimeProvider clock, InterpretAfterResults interpreting, CancellationToken ct)
+        TimeProvider clock, InterpretWithResults interpreting, InterpretationRepair repair, CancellationToken ct)
     {
         var options = settings.Value;
         var jsonOptions = json.Value.SerializerOptions;
@@ -55,16 +55,17 @@ public static class BatchIntake
             throw new BadHttpRequestException("The batch is not valid JSON.", StatusCodes.Status400BadRequest, e);
         }
 
-        return await IngestAsync(parsed, db, options, jsonOptions, clock, interpreting, Actor.From(http.User), ct);
+        return await IngestAsync(parsed, db, options, jsonOptions, clock, interpreting, repair, Actor.From(http.User), ct);
     }
 
     /// <summary>
-    /// Everything after reading: checks, idempotency, QC, one transaction, effects, interpretation. Also used by the
-    /// demo loader, so demo batches take exactly the path a lab's do.
+    /// Everything after reading: checks, idempotency, QC, effects and interpretation in one transaction. Also used by
+    /// the demo loader, so demo batches take exactly the path a lab's do. <paramref name="ct"/> stops it only until
+    /// writing begins.
     /// </summary>
     public static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> IngestAsync(ParsedBatch parsed,
         CommunityLeadDb db, LabIntakeOptions options, JsonSerializerOptions jsonOptions, TimeProvider clock,
-        InterpretAfterResults interpreting, Actor actor, CancellationToken ct)
+        InterpretWithResults interpreting, InterpretationRepair repair, Actor actor, CancellationToken ct)
     {
         // A repeat is recognised before the checks: a retry must get the original outcome even when its kits
         // have moved on since (closed, say), which the checks would now refuse.
@@ -72,7 +73,14 @@ public static class BatchIntake
         var latest = parsed.Problems.Count == 0 && parsed.Request.BatchId is { } batchId
             ? await db.LabBatches.AsNoTracking().Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct)
             : null;
-        if (latest?.ContentHash == hash) return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, ct));
+        if (latest?.ContentHash == hash)
+        {
+            // A lab posts again when its first post timed out. Results stored before they shared a transaction
+            // with interpretation may have been left uninterpreted then: this batch's kits are repaired now
+            // rather than at the next sweep. On a sound store this finds nothing and writes nothing.
+            if (latest.InEffect) await repair.RepairAsync(new RepairScope(BatchKey: latest.Id), CancellationToken.None);
+            return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, ct));
+        }
 
         var (batch, problems) = await new BatchChecker(db, options, clock).CheckAsync(parsed, ct);
         if (batch is null) return BatchProblems.Unprocessable(problems);
@@ -92,20 +100,19 @@ public static class BatchIntake
         if (effects?.Conflict is { } illegal) return illegal;
         try
         {
-            await db.SaveChangesAsync(ct);
+            await interpreting.SaveAsync(effects?.Analyzed ?? [], actor, now);
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
             // Another post of this batch id won the race, or a kit changed meanwhile: nothing of ours was written.
             return BatchProblems.Raced(batch.BatchId);
         }
-        if (effects is not null) await interpreting.AfterResultsAsync(effects.Analyzed, actor, now, ct);
         return TypedResults.Created($"/api/lab/batches/{Uri.EscapeDataString(entity.BatchId)}",
             await BatchViews.OutcomeAsync(db, entity, jsonOptions, ct));
     }
 
     /// <summary>Hash of what the lab reported, without the correction note, so a repeated correction is recognised too.</summary>
-    private static string ContentHash(BatchRequest request, JsonSerializerOptions options) =>
+    internal static string ContentHash(BatchRequest request, JsonSerializerOptions options) =>
         Convert.ToHexStringLower(SHA256.HashData(JsonSerializer.SerializeToUtf8Bytes(
             request with { Correction = null, CorrectionReason = null }, options)));
 }

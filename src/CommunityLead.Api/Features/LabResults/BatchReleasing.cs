@@ -20,7 +20,7 @@ public static class BatchReleasing
 {
     public static async Task<Results<Ok<BatchOutcome>, ValidationProblem, ProblemHttpResult>> Release(
         string batchId, ReleaseRequest request, CommunityLeadDb db, IOptions<JsonOptions> json, TimeProvider clock,
-        InterpretAfterResults interpreting, HttpContext http, CancellationToken ct)
+        InterpretWithResults interpreting, HttpContext http, CancellationToken ct)
     {
         var batch = await db.LabBatches.Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct);
         if (batch is null)
@@ -44,13 +44,13 @@ public static class BatchReleasing
         if (effects.Conflict is { } illegal) return illegal;
         try
         {
-            await db.SaveChangesAsync(ct);
+            // The release, its effects and the interpretation they call for: one transaction, not cancellable.
+            await interpreting.SaveAsync(effects.Analyzed, actor, now);
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
             return BatchProblems.Raced(batchId, "Read the batch again: it may already be released.");
         }
-        await interpreting.AfterResultsAsync(effects.Analyzed, actor, now, ct);
         return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, ct));
     }
 }

@@ -17,6 +17,7 @@ public static class LabResultEndpoints
 
         lab.MapGroup("").RequireAuthorization(Policies.Lab)
             .MapPost("/batches", BatchIntake.Post)
+            .RequireRateLimiting(RateLimitSetup.LabBatches).ProducesProblem(StatusCodes.Status429TooManyRequests)
             .Accepts<BatchRequest>("application/json", "text/csv")
             .ProducesProblem(StatusCodes.Status409Conflict).ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType).ProducesProblem(StatusCodes.Status422UnprocessableEntity);

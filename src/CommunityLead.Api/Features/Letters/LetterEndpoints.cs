@@ -7,15 +7,18 @@ namespace CommunityLead.Api.Features.Letters;
 public sealed record LetterSentRequest(int? LetterId);
 
 public sealed record LetterListing(int Id, string KitCode, LetterKind Kind, LetterLanguage Language, string ProfileId, int ProfileVersion,
-    string Sha256, int Pages, DateTime IssuedAt, DateTime? SentAt, int? DaysFromCollection);
+    string Sha256, int Pages, DateTime IssuedAt, DateTime? SentAt, int? DaysFromCollection, string? CatalogVersion, string? ReleasedBy,
+    DateTime? ReleasedAt);
 
 public static class LetterEndpoints
 {
-    // GET  /api/kits/{code}/letter[?lang=es]   the letter for the current interpretation (PDF)     coordinator
+    // GET  /api/kits/{code}/letter[?lang=es]   the letter for the current interpretation (PDF; a   coordinator
+    //                                          preview while urgent/implausible items are open)
     // POST /api/kits/{code}/letter/sent        confirm it went out: kit → letter-sent              coordinator
     // GET  /api/kits/{code}/letters            every letter issued for the kit                     coordinator
     // GET  /api/letters/{id}                   a stored letter, rendered again byte for byte       coordinator
-    // POST /api/letters/batch[?combined=true]  ZIP of every kit ready for a letter                 coordinator
+    // POST /api/letters/batch[?combined=true]  ZIP of every kit ready for a letter (held kits       coordinator
+    //                                          listed in the manifest, without a PDF)
     public static void MapLetters(this IEndpointRouteBuilder app)
     {
         var kit = app.MapGroup("/api/kits/{code}").WithTags("Letters")
@@ -31,6 +34,7 @@ public static class LetterEndpoints
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         letters.MapGet("/{id:int}", LetterHandlers.Rerender).Produces(StatusCodes.Status200OK, contentType: "application/pdf")
             .ProducesProblem(StatusCodes.Status404NotFound);
-        letters.MapPost("/batch", LetterHandlers.Batch).Produces(StatusCodes.Status200OK, contentType: "application/zip");
+        letters.MapPost("/batch", LetterBatch.Create).Produces(StatusCodes.Status200OK, contentType: "application/zip")
+            .RequireRateLimiting(RateLimitSetup.LetterBatches).ProducesProblem(StatusCodes.Status429TooManyRequests);
     }
 }

@@ -1,5 +1,3 @@
-using System.IO.Compression;
-using System.Text;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
@@ -29,8 +27,19 @@ public static class LetterHandlers
         if (kit is null) return missing!;
         if (kit.State is not (KitState.Interpreted or KitState.LetterSent or KitState.Closed))
             return NotReady(kit.Code, kit.State);
+        var release = (await LetterRelease.ForAsync(db, [kit.Id], ct)).Of(kit.Id);
+        if (!release.Released)
+        {
+            // Only a preview until a coordinator has checked the result and called: nothing is recorded.
+            var preview = await issuing.PreviewAsync(kit.Id, language, ct);
+            if (preview is null) return NotReady(kit.Code, kit.State);
+            http.Response.Headers["X-Letter-Released"] = "false";
+            http.Response.Headers["X-Letter-Awaiting-Attention"] = string.Join(",", release.Pending.Select(p => p.Id));
+            return TypedResults.File(preview, "application/pdf", $"letter-{kit.Code}-preview.pdf");
+        }
         var letter = (await issuing.IssueAsync([kit.Id], language, Actor.From(http.User), ct)).SingleOrDefault();
         if (letter is null) return NotReady(kit.Code, kit.State);
+        http.Response.Headers["X-Letter-Released"] = "true";
         http.Response.Headers["X-Letter-Id"] = letter.Record.Id.ToString();
         http.Response.Headers["X-Letter-Sha256"] = letter.Record.Sha256;
         return TypedResults.File(letter.Pdf, "application/pdf", FileName(letter.Record));
@@ -43,6 +52,8 @@ public static class LetterHandlers
         var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
         if (invalid is not null) return invalid;
         if (kit is null) return missing!;
+        var release = (await LetterRelease.ForAsync(db, [kit.Id], ct)).Of(kit.Id);
+        if (!release.Released) return LetterRelease.NotReleased(kit.Code, release);
         var current = await db.Interpretations.Where(i => i.KitId == kit.Id && i.SupersededAtUtc == null).Select(i => (int?)i.Id).SingleOrDefaultAsync(ct);
         var letter = await db.Letters
             .Where(l => l.KitId == kit.Id && (request == null || request.LetterId == null ? l.InterpretationId == current : l.Id == request.LetterId))
@@ -57,6 +68,9 @@ public static class LetterHandlers
         if (letter.SentAtUtc is not null)
             return TypedResults.Problem(statusCode: 409, title: "This letter was already confirmed as sent.",
                 detail: $"Letter {letter.Id} was confirmed on {letter.SentAtUtc:yyyy-MM-dd} by {letter.SentBy}.");
+        // A letter recorded before the gate existed, released since: it carries who released it.
+        if (release.Needed && letter.ReleasedBy is null)
+            (letter.ReleasedBy, letter.ReleasedAtUtc) = (release.ReleasedBy, release.ReleasedAtUtc);
         if (await ConfirmAsync(db, kit, letter, Actor.From(http.User), clock.GetUtcNow().UtcDateTime, ct) is { } illegal)
             return illegal;
         if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
@@ -100,39 +114,14 @@ public static class LetterHandlers
         return TypedResults.File(pdf, "application/pdf", FileName(letter));
     }
 
-    /// <summary>Every kit ready for a letter (interpreted, not yet sent) in one ZIP, with a manifest and optionally one PDF to print.</summary>
-    public static async Task<FileContentHttpResult> Batch(
-        CommunityLeadDb db, LetterIssuing issuing, TimeProvider clock, HttpContext http, CancellationToken ct, bool combined = false)
-    {
-        var ready = await db.Kits.AsNoTracking().Where(k => k.State == KitState.Interpreted).Select(k => k.Id).ToListAsync(ct);
-        var letters = ready.Count == 0 ? [] : await issuing.IssueAsync(ready, null, Actor.From(http.User), ct);
-        using var buffer = new MemoryStream();
-        using (var zip = new ZipArchive(buffer, ZipArchiveMode.Create, leaveOpen: true))
-        {
-            var manifest = new StringBuilder("kitCode,letterId,kind,language,pages,sha256\n");
-            foreach (var letter in letters)
-            {
-                await using (var entry = zip.CreateEntry($"letters/{FileName(letter.Record)}", CompressionLevel.Fastest).Open())
-                    await entry.WriteAsync(letter.Pdf, ct);
-                var r = letter.Record;
-                manifest.Append($"{r.KitCode},{r.Id},{KebabEnum.Name(r.Kind)},{KebabEnum.Name(r.Language)},{r.Pages},{r.Sha256}\n");
-            }
-            await using (var entry = zip.CreateEntry("manifest.csv").Open())
-                await entry.WriteAsync(Encoding.UTF8.GetBytes(manifest.ToString()), ct);
-            if (combined && letters.Count > 0)
-                await using (var entry = zip.CreateEntry("all-letters.pdf", CompressionLevel.Fastest).Open())
-                    await entry.WriteAsync(LetterPdf.Combine(letters.Select(l => l.Pdf)), ct);
-        }
-        return TypedResults.File(buffer.ToArray(), "application/zip", $"letters-{clock.GetUtcNow():yyyy-MM-dd}.zip");
-    }
-
     private static ProblemHttpResult NotReady(string code, KitState state) =>
         TypedResults.Problem(statusCode: 409, title: "This kit has no interpretation for a letter yet.",
             detail: $"Kit {code} is {KebabEnum.Name(state)}; a letter is written once its results are in and interpreted.",
             extensions: new Dictionary<string, object?> { ["currentState"] = KebabEnum.Name(state) });
 
-    private static string FileName(IssuedLetter l) => $"letter-{l.KitCode}-{KebabEnum.Name(l.Language)}.pdf";
+    internal static string FileName(IssuedLetter l) => $"letter-{l.KitCode}-{KebabEnum.Name(l.Language)}.pdf";
 
     private static LetterListing Listing(IssuedLetter l) =>
-        new(l.Id, l.KitCode, l.Kind, l.Language, l.ProfileId, l.ProfileVersion, l.Sha256, l.Pages, l.IssuedAtUtc, l.SentAtUtc, l.DaysFromCollection);
+        new(l.Id, l.KitCode, l.Kind, l.Language, l.ProfileId, l.ProfileVersion, l.Sha256, l.Pages, l.IssuedAtUtc, l.SentAtUtc, l.DaysFromCollection,
+            l.CatalogVersion, l.ReleasedBy, l.ReleasedAtUtc);
 }

@@ -5,6 +5,8 @@ using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Letters.Composing;
+using CommunityLead.Api.Features.Wording;
+using CommunityLead.Api.Features.Letters.Layout;
 using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using Microsoft.AspNetCore.Http.Json;
@@ -18,14 +20,18 @@ public sealed record RenderedLetter(IssuedLetter Record, byte[] Pdf);
 
 /// <summary>
 /// Composes and renders letters from kits' stored interpretations and records each one issued (content,
-/// hash, interpretation and profile version, language). Works on many kits at once for a mailing.
+/// hash, interpretation and profile version, language, and who released it if it needed a person first).
+/// Works on many kits at once for a mailing.
 /// </summary>
 public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, ILetterLayout layout, LetterSettings settings,
     IOptions<JsonOptions> json, TimeProvider clock)
 {
     private JsonSerializerOptions Json => json.Value.SerializerOptions;
 
-    /// <summary>Letters for the given kits; kits without a stored interpretation are skipped.</summary>
+    /// <summary>
+    /// Letters for the given kits; kits without a stored interpretation are skipped, and so are kits whose letter is
+    /// still held back (<see cref="LetterRelease"/>): those have only a preview.
+    /// </summary>
     public async Task<List<RenderedLetter>> IssueAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
     {
         for (var attempt = 1; ; attempt++)
@@ -47,6 +53,56 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
 
     private async Task<List<RenderedLetter>> IssueOnceAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
     {
+        var drafts = await DraftAsync(kitIds, language, ct);
+        var releases = await LetterRelease.ForAsync(db, kitIds, ct);
+        var now = clock.GetUtcNow().UtcDateTime;
+        var letters = new List<RenderedLetter>();
+        foreach (var draft in drafts)
+        {
+            // A letter still held back is not issued: nothing is recorded that could be confirmed as sent.
+            var release = releases.Of(draft.KitId);
+            if (!release.Released) continue;
+            var pdf = layout.Render(draft.Content);
+            var hash = Convert.ToHexStringLower(SHA256.HashData(pdf));
+            var stored = draft.Stored;
+            var record = await db.Letters.FirstOrDefaultAsync(l => l.KitId == draft.KitId && l.Sha256 == hash && l.InterpretationId == stored.Id, ct);
+            if (record is null)
+            {
+                record = new IssuedLetter
+                {
+                    KitId = draft.KitId, KitCode = draft.KitCode, InterpretationId = stored.Id, ProfileId = stored.ProfileId,
+                    ProfileVersion = stored.ProfileVersion, Language = draft.Language, Kind = draft.Kind,
+                    ContentJson = JsonSerializer.Serialize(draft.Content, Json), Sha256 = hash, Pages = LetterPdf.PageCount(pdf),
+                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = draft.CollectedOn, CatalogVersion = WordingCatalogue.Version,
+                };
+                db.Letters.Add(record);
+            }
+            // Recorded before the gate existed (or issued again): it carries its release from now on.
+            if (release.Needed && record.ReleasedBy is null)
+                (record.ReleasedBy, record.ReleasedAtUtc) = (release.ReleasedBy, release.ReleasedAtUtc);
+            letters.Add(new RenderedLetter(record, pdf));
+        }
+        await db.SaveChangesAsync(ct);
+        return letters;
+    }
+
+    /// <summary>
+    /// The kit's letter as it would go out, marked as a preview on every page; recorded nowhere. Null when the kit
+    /// has no stored interpretation.
+    /// </summary>
+    public async Task<byte[]?> PreviewAsync(int kitId, LetterLanguage? language, CancellationToken ct)
+    {
+        var draft = (await DraftAsync([kitId], language, ct)).SingleOrDefault();
+        return draft is null ? null
+            : PreviewStamp.Apply(layout.Render(draft.Content), PreviewWords.For(draft.Language), PreviewWords.Watermark(draft.Language));
+    }
+
+    private sealed record Draft(int KitId, string KitCode, KitInterpretation Stored, LetterLanguage Language, LetterKind Kind,
+        DateOnly CollectedOn, LetterContent Content);
+
+    /// <summary>Each kit's letter worded from its stored interpretation, in code order; kits without one are skipped.</summary>
+    private async Task<List<Draft>> DraftAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, CancellationToken ct)
+    {
         var kits = await db.Kits.AsNoTracking().Where(k => kitIds.Contains(k.Id))
             .Select(k => new { k.Id, k.Code, k.Household }).ToListAsync(ct);
         var interpretations = await db.Interpretations.AsNoTracking()
@@ -58,8 +114,8 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
         var sentBefore = (await db.Letters.AsNoTracking().Where(l => kitIds.Contains(l.KitId) && l.SentAtUtc != null)
             .Select(l => l.KitId).Distinct().ToListAsync(ct)).ToHashSet();
 
-        var now = clock.GetUtcNow().UtcDateTime;
-        var letters = new List<RenderedLetter>();
+        var today = DateOnly.FromDateTime(clock.GetUtcNow().UtcDateTime);
+        var drafts = new List<Draft>();
         foreach (var kit in kits.OrderBy(k => k.Code, StringComparer.Ordinal))
         {
             if (!interpretations.TryGetValue(kit.Id, out var stored)) continue;
@@ -76,26 +132,11 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
             var content = LetterComposer.Compose(outcome, profile?.NameIn(lang == LetterLanguage.Es) ?? stored.ProfileId,
                 new LetterRecipient(household.Name, household.Address.Line1, household.Address.Line2, household.Address.City,
                     household.Address.Region, household.Address.PostalCode),
-                lang, kind, kit.Code, collected, DateOnly.FromDateTime(now), household.WaterSource == WaterSource.PrivateWell,
+                lang, kind, kit.Code, collected, today, household.WaterSource == WaterSource.PrivateWell,
                 household.ChildUnder6 || household.Pregnant, settings, levels);
-            var pdf = layout.Render(content);
-            var hash = Convert.ToHexStringLower(SHA256.HashData(pdf));
-            var record = await db.Letters.FirstOrDefaultAsync(l => l.KitId == kit.Id && l.Sha256 == hash && l.InterpretationId == stored.Id, ct);
-            if (record is null)
-            {
-                record = new IssuedLetter
-                {
-                    KitId = kit.Id, KitCode = kit.Code, InterpretationId = stored.Id, ProfileId = stored.ProfileId,
-                    ProfileVersion = stored.ProfileVersion, Language = lang, Kind = kind,
-                    ContentJson = JsonSerializer.Serialize(content, Json), Sha256 = hash, Pages = LetterPdf.PageCount(pdf),
-                    IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = collected, CatalogVersion = MessageCatalog.Version,
-                };
-                db.Letters.Add(record);
-            }
-            letters.Add(new RenderedLetter(record, pdf));
+            drafts.Add(new Draft(kit.Id, kit.Code, stored, lang, kind, collected, content));
         }
-        await db.SaveChangesAsync(ct);
-        return letters;
+        return drafts;
     }
 
     /// <summary>Renders a stored letter again from its recorded content; the bytes must match the recorded hash.</summary>

@@ -8,9 +8,41 @@ public static partial class MessageCatalog
         "Use filtered or bottled water for drinking, cooking, and baby formula. Do this until the lead problem is fixed.",
         "Use agua filtrada o embotellada para beber, cocinar y preparar la fórmula del bebé, hasta que se resuelva el problema del plomo.");
 
+    /// <summary>
+    /// No word on fluoride: carbon filters certified to NSF/ANSI 53 for lead generally do not remove it; only reverse
+    /// osmosis (NSF/ANSI 58) does, and that is named only in the copper filter step (DOMAIN.md §6 [memory]).
+    /// </summary>
     public static readonly MessageTemplate StepFilter = new("step.filter",
-        "Use a filter certified to NSF/ANSI 53 for lead. Look for NSF/ANSI 42 too, for small particles. These filters may also remove fluoride. Change the cartridge when the maker says.",
-        "Use un filtro certificado según la norma NSF/ANSI 53 para reducir el plomo. Busque que también cumpla la NSF/ANSI 42, para partículas pequeñas. Estos filtros pueden quitar también el flúor. Cambie el cartucho cuando lo indique el fabricante.");
+        "Use a filter certified to NSF/ANSI 53 for lead. Look for NSF/ANSI 42 too, for small particles. Change the cartridge when the maker says.",
+        "Use un filtro certificado con la norma NSF/ANSI 53 para el plomo. Es mejor si también cumple la NSF/ANSI 42, para partículas. Cambie el cartucho cuando lo diga el fabricante.");
+
+    /// <summary>The urgent plan: bottled water only until a retest (no filter, no running the tap meanwhile).</summary>
+    public static readonly MessageTemplate StepBottledOnly = new("step.bottled-only",
+        "Use only bottled water for drinking, cooking, and baby formula. Keep doing this until we test your water again and tell you what we found.",
+        "Use solo agua embotellada para beber, cocinar y preparar la fórmula del bebé. Siga así hasta que volvamos a analizar su agua y le digamos el resultado.");
+
+    /// <summary>
+    /// Why the urgent plan is bottled water and not a filter: NSF/ANSI 53 lead claims are tested on water with
+    /// 150 µg/L of lead [memory: NSF/ANSI 53 lead reduction challenge], so a filter's claim says nothing beyond it,
+    /// and a very high first result may hide higher ones.
+    /// </summary>
+    public static readonly MessageTemplate FilterTestedLevel = new("care.filter-tested-level",
+        "Filters certified for lead are tested on water with 150 µg/L of lead. Your water may have more lead at times. So please use bottled water, not a filter, until we test again.",
+        "Los filtros certificados para plomo se prueban con agua que tiene 150 µg/L de plomo. Su agua puede tener más plomo a veces. Por eso, use agua embotellada y no un filtro hasta que volvamos a analizarla.");
+
+    /// <summary>Copper at its action level: copper's own steps (DOMAIN.md §6 [published: EPA copper health information]).</summary>
+    public static readonly MessageTemplate StepCopperRunTap = new("step.copper-run-tap",
+        "Copper builds up in water that sits in copper pipes. If the water has not been used for a few hours, run the cold tap for 30 seconds to 2 minutes before you drink it or cook with it.",
+        "El cobre se acumula en el agua que se queda quieta en las tuberías de cobre. Si nadie ha usado el agua en varias horas, deje correr el agua fría de 30 segundos a 2 minutos antes de beberla o de cocinar con ella.");
+
+    public static readonly MessageTemplate StepCopperFormula = new("step.copper-formula",
+        "Babies are more sensitive to copper. Make baby formula with bottled water until your copper is lower.",
+        "Los bebés son más sensibles al cobre. Prepare la fórmula del bebé con agua embotellada hasta que baje el cobre.");
+
+    /// <summary>Reverse osmosis is named here, so fluoride is too: it does remove fluoride (DOMAIN.md §6 [memory]).</summary>
+    public static readonly MessageTemplate StepCopperFilter = new("step.copper-filter",
+        "If copper stays high, use a filter certified to reduce copper. Check that the label lists copper. Reverse osmosis filters (NSF/ANSI 58) often do. They also take out fluoride, so ask your dentist about fluoride for your children.",
+        "Si el cobre sigue alto, use un filtro certificado para reducir el cobre. Revise que la etiqueta diga cobre. Los filtros de ósmosis inversa (NSF/ANSI 58) muchas veces lo están. También quitan el flúor, así que pregunte a su dentista por el flúor para sus hijos.");
 
     public static readonly MessageTemplate StepColdWater = new("step.cold-water",
         "Use only cold water for drinking, cooking, and baby formula. Hot water is more likely to have lead.",
@@ -48,6 +80,11 @@ public static partial class MessageCatalog
         "Young children and babies before birth are most at risk from lead. Since lead was found in your water, use only cold filtered or bottled water for drinking, cooking, and baby formula.",
         "Los niños pequeños y los bebés antes de nacer son los que corren más riesgo con el plomo. Como se encontró plomo en su agua, use solo agua fría filtrada o agua embotellada para beber, cocinar y preparar la fórmula del bebé.");
 
+    /// <summary>An urgent result in a home with a young child or a pregnancy: the same bottled-water plan, said for them.</summary>
+    public static readonly MessageTemplate VulnerableUrgent = new("care.vulnerable-urgent",
+        "Young children and babies before birth are most at risk from lead. Make sure children drink only bottled water, and make baby formula with bottled water.",
+        "Los niños pequeños y los bebés antes de nacer son los que corren más riesgo con el plomo. Asegúrese de que los niños tomen solo agua embotellada, y prepare la fórmula del bebé con agua embotellada.");
+
     public static readonly MessageTemplate VulnerableSoil = new("care.vulnerable-soil",
         "Young children are most at risk from lead in soil. They play on the ground and put their hands in their mouths.",
         "Los niños pequeños son los que corren más riesgo con el plomo en la tierra, porque juegan en el suelo y se llevan las manos a la boca.");
@@ -67,7 +104,7 @@ public static partial class MessageCatalog
 
     public static readonly MessageTemplate RetestHoldingTime = new("retest.outside-holding-time",
         "Too much time passed before the lab could test the sample.",
-        "Pasó demasiado tiempo antes de que el laboratorio pudiera analizar la muestra.");
+        "Pasó demasiado tiempo antes de que la muestra se pudiera analizar en el laboratorio.");
 
     public static readonly MessageTemplate RetestQcHeld = new("retest.qc-held",
         "The lab's own quality checks did not pass, so it could not confirm the result.",

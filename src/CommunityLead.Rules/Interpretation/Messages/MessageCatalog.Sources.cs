@@ -6,20 +6,20 @@ namespace CommunityLead.Rules.Interpretation;
 public static partial class MessageCatalog
 {
     public static readonly MessageTemplate PatternFaucet = new("pattern.faucet",
-        "Lead was high in the first bottle and low after running the tap. So the lead likely comes from the faucet or pipes close to it. Running the cold tap before use helps. A plumber can replace the faucet.",
-        "El plomo salió alto en la primera botella y bajo después de dejar correr el agua. Eso indica que probablemente viene del grifo o de las tuberías cercanas. Dejar correr el agua fría antes de usarla ayuda. Un plomero puede cambiar el grifo.");
+        "Lead was high in the first bottle and lower after running the tap. So the lead likely comes from the faucet or pipes close to it. A plumber can replace the faucet.",
+        "El plomo salió alto en la primera botella y más bajo después de dejar correr el agua. Eso indica que probablemente viene del grifo o de las tuberías cercanas. Un plomero puede cambiar el grifo.");
 
     public static readonly MessageTemplate PatternFurther = new("pattern.further",
-        "Lead was still in the water after running the tap. So it may come from the service line, the pipe from the street to your home, or other pipes further away. Running the tap may not help. Ask your water utility to check your service line, and use a filter certified for lead.",
-        "Todavía había plomo en el agua después de dejarla correr. Por eso puede venir de la línea de servicio (el tubo que trae el agua de la calle a su casa) o de otras tuberías más lejanas. Dejar correr el agua quizás no ayude. Pida a su compañía de agua que revise su línea de servicio, y use un filtro certificado para plomo.");
+        "Lead was still in the water after running the tap. So it may come from the service line, the pipe from the street to your home, or other pipes further away. Running the tap pulls more water through that pipe, so it does not help here.",
+        "Todavía había plomo en el agua después de dejarla correr. Por eso puede venir de la línea de servicio (el tubo que trae el agua de la calle a su casa) o de otras tuberías más lejanas. Dejar correr el agua trae más agua por ese tubo, así que aquí no ayuda.");
 
     public static readonly MessageTemplate PatternFurtherWell = new("pattern.further-well",
-        "Lead was still in the water after running the tap. So it may come from pipes further from the tap or from parts of your well system. Running the tap may not help. A licensed plumber or well contractor can help find the source. Use a filter certified for lead.",
-        "Todavía había plomo en el agua después de dejarla correr. Por eso puede venir de tuberías más alejadas del grifo o de alguna parte de su sistema de pozo. Dejar correr el agua quizás no ayude. Un plomero o un técnico de pozos con licencia puede ayudarle a encontrar el origen. Use un filtro certificado para plomo.");
+        "Lead was still in the water after running the tap. So it may come from pipes further from the tap or from parts of your well system. Running the tap pulls more water through those pipes, so it does not help here. A licensed plumber or well contractor can help find the source.",
+        "Todavía había plomo en el agua después de dejarla correr. Por eso puede venir de tuberías más alejadas del grifo o de alguna parte de su sistema de pozo. Dejar correr el agua trae más agua por esas tuberías, así que aquí no ayuda. Un plomero o un técnico de pozos con licencia puede ayudarle a encontrar el origen.");
 
     public static readonly MessageTemplate PatternNone = new("pattern.none",
-        "Lead was low in the first bottle and after running the tap. We saw no sign of a lead source at this tap.",
-        "El plomo salió bajo tanto en la primera botella como después de dejar correr el agua. No vimos señales de una fuente de plomo en este grifo.");
+        "Lead was below our levels in the first bottle and after running the tap. So we cannot point to one source of lead at this tap.",
+        "El plomo estuvo por debajo de nuestros niveles en la primera botella y después de dejar correr el agua. Así que no podemos señalar una sola fuente de plomo en este grifo.");
 
     // Sequential profiles: {position} is the bottle number, {litres} the water drawn before it, {metres} the
     // length of pipe that water fills.
@@ -40,8 +40,13 @@ public static partial class MessageCatalog
         "La botella {position} fue la que tuvo más plomo. Antes de llenarla salieron unos {litres} de agua, lo que cabe en unos {metres} de tubería. Por eso el plomo puede venir de tuberías alejadas del grifo o de alguna parte de su sistema de pozo.");
 
     public static readonly MessageTemplate PeakLow = new("peak.low",
-        "Lead was low in each numbered bottle. It was highest in bottle {position}.",
-        "El plomo salió bajo en cada una de las botellas numeradas. El valor más alto fue el de la botella {position}.");
+        "Lead was below our levels in each numbered bottle. It was highest in bottle {position}.",
+        "El plomo estuvo por debajo de nuestros niveles en cada una de las botellas numeradas. El valor más alto fue el de la botella {position}.");
+
+    /// <summary>Where lead points to the service line and the household has not been told about its line already.</summary>
+    public static readonly MessageTemplate StepAskUtility = new("step.ask-utility",
+        "Ask your water utility to check the service line, the pipe from the street to your home.",
+        "Pida a su compañía de agua que revise la línea de servicio, el tubo que trae el agua de la calle a su casa.");
 
     public static readonly MessageTemplate FifthLiterHigher = new("fifth-liter.higher",
         "Lead was higher in the fifth liter than in the first. The fifth liter sat further from the tap, often in the service line.",
@@ -61,7 +66,7 @@ public static partial class MessageCatalog
 
     public static readonly MessageTemplate WellPipe = new("service-line.well-pipe",
         "Your home is listed as having lead or galvanized steel pipe. A licensed plumber can check it and tell you how to replace it.",
-        "Según nuestros datos, su casa tiene tubería de plomo o de acero galvanizado. Un plomero con licencia puede revisarla y explicarle cómo reemplazarla.");
+        "Según nuestros datos, su casa tiene tubos de plomo o de acero galvanizado. Un plomero con licencia puede revisarlos y decirle cómo cambiarlos.");
 
     public static readonly MessageTemplate WellAdvice = new("well.advice",
         "Your water comes from a private well, so no one else tests it for you. Test it again, and ask your local health department how often to test and how to treat well water.",

@@ -31,7 +31,13 @@ public class AttentionTextTests
         var finding = new Finding(BottleType.Soil, null, SoilLocation.PlayArea, Analyte.Copper, double.MaxValue, Units.MilligramsPerKilogram,
             false, Band.Urgent, 1, "meaning");
         var flagLength = StoreModel.MaxLength("KitFlag.Message");
-        var outcome = Outcome([finding], Reasons(40, i => $"{i:00} {new string('r', flagLength - 3)}"));
+        var outcome = Outcome([finding], Reasons(40, i => $"{i:00} {new string('r', flagLength - 3)}")) with
+        {
+            // Implausible results of every kind, each with the largest figures: more than the line holds.
+            Implausible = [.. Enum.GetValues<ImplausibleReason>().SelectMany(reason => Enumerable.Repeat(new ImplausibleResult(reason,
+                BottleType.Sequential, int.MaxValue, SoilLocation.DripLine, Analyte.Copper, -double.MaxValue, Units.MilligramsPerKilogram,
+                double.MaxValue, double.MaxValue, true, double.MaxValue), 10))],
+        };
 
         foreach (var flag in Enum.GetValues<AttentionFlag>())
             Assert.InRange(AttentionText.For(flag, outcome).Length, 1, Limit);
@@ -81,5 +87,31 @@ public class AttentionTextTests
         Assert.Equal("retest-needed", item["reason"]!.GetValue<string>());
         Assert.InRange(item["detail"]!.GetValue<string>().Length, 1, Limit);
         Assert.EndsWith("more on the kit's interpretation.)", item["detail"]!.GetValue<string>());
+    }
+
+    [Fact]
+    public void AttentionText_ImplausibleLead_SaysWhichResultWhyAndThatTheLetterWaits()
+    {
+        // "2.0 ppm" read as mg/L: 2,000 µg/L against the 1,000 µg/L default (common practice, our choice).
+        var result = new ImplausibleResult(ImplausibleReason.AboveTapWaterRange, BottleType.FirstDraw, null, null, Analyte.Lead, 2000,
+            Units.MicrogramsPerLiter, 1000);
+
+        var text = AttentionText.For(AttentionFlag.Implausible, Outcome([], []) with { Implausible = [result] });
+
+        Assert.Equal("Lead 2,000 µg/L in the first draw is above 1,000 µg/L, far more than tap water usually holds: check the lab's " +
+            "unit (ppm vs ppb). The letter waits until this item is resolved with a note.", text);
+    }
+
+    [Fact]
+    public void AttentionText_FlushedFarAboveFirstDraw_NamesBothFiguresAndTheActionLevel()
+    {
+        var result = new ImplausibleResult(ImplausibleReason.FlushedFarAboveFirstDraw, BottleType.Flushed, null, null, Analyte.Lead, 25,
+            Units.MicrogramsPerLiter, 10, FirstDraw: 1, FirstDrawBelowReportingLimit: true, Factor: 10);
+
+        var text = AttentionText.For(AttentionFlag.Implausible, Outcome([], []) with { Implausible = [result] });
+
+        Assert.StartsWith("Lead 25 µg/L in the flushed sample is more than 10 times the first draw (below 1 µg/L) and at or above " +
+            "the action level (10 µg/L): check with the household and the lab that the bottles were not swapped.", text);
+        Assert.EndsWith(AttentionText.HeldLetter, text);
     }
 }

@@ -23,14 +23,20 @@ internal static class InterpreterCases
     {
         // First draw against flushed water.
         ["both not detected"] = new(Water(NotDetected(BottleType.FirstDraw), NotDetected(BottleType.Flushed)), Band.NotDetected, NoSourceAtThisTap, [],
-            ["summary.water.not-detected", "result.not-detected", "pattern.none", "care.blood-test"], ["step.filter"]),
-        ["both low"] = new(Water(First(3), Flushed(1)), Band.Low, NoSourceAtThisTap, [], ["summary.water.low", "result.low", "pattern.none"]),
+            ["summary.water.not-detected", "result.not-detected", "care.blood-test"], ["step.filter", "pattern.none", "summary.water.low"]),
+        ["both low"] = new(Water(First(3), Flushed(1)), Band.Low, NoSourceAtThisTap, [], ["summary.water.low", "result.low", "pattern.none", "step.run-tap"], ["step.filter"]),
         ["faucet at action level"] = new(Water(First(14), Flushed(2)), Band.Action, FaucetOrNearbyPlumbing, [ActionLevel],
-            ["summary.water.action", "result.action", "pattern.faucet", "step.use-filtered", "step.filter"]),
+            ["summary.water.action", "result.action", "pattern.faucet", "step.use-filtered", "step.filter"], ["step.run-tap"]),
+
+        // Found by a health educator: 40 first draw, 6.2 flushed was told both "running the tap helps" and "use filtered
+        // water". One plan at the action level: filtered or bottled water, never running the tap instead (DOMAIN.md §6).
+        ["action level, faucet, 40 and 6.2"] = new(Water(First(40), Flushed(6.2)), Band.Action, FaucetOrNearbyPlumbing, [ActionLevel],
+            ["summary.water.action", "pattern.faucet", "step.use-filtered", "step.filter", "step.cold-water"], ["step.run-tap", "summary.water.low"]),
         ["faucet urgent"] = new(Water(First(60), Flushed(3)), Band.Urgent, FaucetOrNearbyPlumbing, [Urgent, ActionLevel],
-            ["summary.water.urgent", "result.urgent", "pattern.faucet", "step.filter"], ["step.use-filtered", "step.cold-water", "step.run-tap"]),
+            ["summary.water.urgent", "result.urgent", "pattern.faucet", "step.bottled-only", "care.filter-tested-level"],
+            ["step.filter", "step.use-filtered", "step.cold-water", "step.run-tap"]),
         ["flushed higher"] = new(Water(First(12), Flushed(15)), Band.Action, ServiceLineOrFurther, [ActionLevel, SuspectedServiceLine],
-            ["pattern.further", "step.filter"]),
+            ["pattern.further", "step.filter", "step.use-filtered", "step.ask-utility"], ["step.run-tap"]),
         ["flushed 75 % of first draw"] = new(Water(First(12), Flushed(9)), Band.Action, ServiceLineOrFurther, [ActionLevel, SuspectedServiceLine],
             ["pattern.further"]),
         ["flushed 67 % of first draw"] = new(Water(First(12), Flushed(8)), Band.Action, FaucetOrNearbyPlumbing, [ActionLevel], ["pattern.faucet"]),
@@ -39,9 +45,9 @@ internal static class InterpreterCases
         ["first low flushed high"] = new(Water(First(4), Flushed(11)), Band.Action, ServiceLineOrFurther, [ActionLevel, SuspectedServiceLine],
             ["pattern.further"]),
         ["program advisory faucet"] = new(Water(First(7), Flushed(1)), Band.Advisory, FaucetOrNearbyPlumbing, [],
-            ["summary.water.advisory", "result.advisory", "pattern.faucet", "step.filter"], ["step.use-filtered"], Program: Advisory5),
+            ["summary.water.advisory", "result.advisory", "pattern.faucet", "step.filter", "step.run-tap"], ["step.use-filtered"], Program: Advisory5),
         ["program advisory flushed same"] = new(Water(First(6), Flushed(6)), Band.Advisory, ServiceLineOrFurther, [SuspectedServiceLine],
-            ["pattern.further"], Program: Advisory5),
+            ["pattern.further", "step.filter", "step.ask-utility"], ["step.run-tap"], Program: Advisory5),
         ["program advisory both under it"] = new(Water(First(4), Flushed(4.5)), Band.Low, NoSourceAtThisTap, [], ["pattern.none"], Program: Advisory5),
         ["Health Canada 5 at the level"] = new(Water(First(5), Flushed(1)), Band.Action, FaucetOrNearbyPlumbing, [ActionLevel],
             ["result.action"], Profile: Levels.HealthCanada),
@@ -58,26 +64,43 @@ internal static class InterpreterCases
         ["first liter higher"] = new(Water(Home(line: ServiceLineMaterial.Lead), First(14), Fifth(8)), Band.Action, null, [ActionLevel],
             ["service-line.lead"], ["fifth-liter.higher"]),
         ["first and fifth low"] = new(Water(Home(line: ServiceLineMaterial.Lead), First(2), Fifth(3)), Band.Low, null, [],
-            ["service-line.lead"], ["fifth-liter.higher"]),
+            ["service-line.lead", "step.filter"], ["fifth-liter.higher", "step.run-tap"]),
+        // A known lead service line: running the tap draws service-line water, so a filter instead (DOMAIN.md §6 [practice]).
+        ["lead service line, both under the level"] = new(Water(Home(line: ServiceLineMaterial.Lead), First(3), Flushed(3)), Band.Low, NoSourceAtThisTap, [],
+            ["service-line.lead", "step.filter", "summary.water.low"], ["step.run-tap", "step.ask-utility"]),
 
         // Copper.
         ["copper taste"] = new(Water(NotDetected(BottleType.FirstDraw), Copper(1.0)), Band.Advisory, null, [], ["copper.taste"], ["copper.health"]),
-        ["copper action"] = new(Water(First(2), Copper(1.3)), Band.Action, null, [ActionLevel], ["copper.health", "result.action"], ["step.use-filtered"]),
+        ["copper action"] = new(Water(First(2), Copper(1.3)), Band.Action, null, [ActionLevel],
+            ["summary.water.copper-action", "summary.water.low", "copper.health", "result.action", "step.copper-run-tap", "step.copper-filter"],
+            ["step.use-filtered", "step.filter", "summary.water.action"]),
+        // Found by a health educator: copper 1.31 with lead 2.1 in a pregnant home was told "ask a doctor soon about a blood
+        // lead test" and given lead-filter steps. Copper gets copper advice (DOMAIN.md §6: copper does not call for a blood
+        // lead test); the ordinary blood-test caution every letter carries stays.
+        ["copper only, 1.31, pregnant"] = new(Water(Home(pregnant: true), First(2.1), Copper(1.31)), Band.Action, null, [ActionLevelVulnerableHome],
+            ["summary.water.copper-action", "copper.health", "step.copper-formula", "step.copper-filter", "step.copper-run-tap", "care.blood-test"],
+            ["care.blood-test-soon", "step.filter", "step.use-filtered", "care.vulnerable-water", "step.run-tap", "summary.water.action"]),
+        ["copper below its taste level, no action level"] = new(Water(First(2), Copper(0.4)), Band.Low, null, [], ["result.below-level", "result.low"],
+            Profile: Levels.CopperTasteOnly),
         ["copper, profile without copper levels"] = new(Water(First(2), Copper(1.6)), Band.Low, null, [], ["result.measured"],
             Profile: Levels.HealthCanada),
         ["school, lab can't see 1 ppb"] = new(Water(NotDetected(BottleType.FirstDraw, reportingLimit: 2)), Band.Advisory, null, [],
             ["result.not-detected", "result.reporting-limit-at-level", "summary.water.cannot-tell"], Profile: Levels.Schools),
         ["copper low"] = new(Water(First(2), Copper(0.4)), Band.Low, null, [], ["result.low"], ["copper.taste", "copper.health"]),
         ["copper action, child"] = new(Water(Home(child: true), NotDetected(BottleType.FirstDraw), Copper(1.5)), Band.Action, null,
-            [ActionLevelVulnerableHome], ["copper.health", "care.blood-test"], ["care.vulnerable-water"]),
+            [ActionLevelVulnerableHome], ["copper.health", "care.blood-test", "summary.water.not-detected"], ["care.vulnerable-water", "care.blood-test-soon"]),
 
         // The household.
+        // Under every level: the ordinary caution (ask a doctor about a blood lead test), not the stronger one.
         ["child, low lead"] = new(Water(Home(child: true), First(2), Flushed(1)), Band.Low, NoSourceAtThisTap, [],
-            ["care.vulnerable-water", "care.blood-test-soon", "step.filter"], ["care.blood-test"]),
+            ["care.blood-test", "summary.water.low"], ["care.vulnerable-water", "care.blood-test-soon"]),
+        ["child, caution level"] = new(Water(Home(child: true), First(6), Flushed(1)), Band.Advisory, FaucetOrNearbyPlumbing, [],
+            ["care.vulnerable-water", "care.blood-test-soon", "step.filter"], ["care.blood-test"], Program: Advisory5),
         ["pregnant, action"] = new(Water(Home(pregnant: true), First(11), Flushed(3)), Band.Action, FaucetOrNearbyPlumbing, [ActionLevelVulnerableHome],
             ["care.vulnerable-water", "care.blood-test-soon"]),
         ["child, urgent"] = new(Water(Home(child: true), First(80), Flushed(60)), Band.Urgent, ServiceLineOrFurther,
-            [Urgent, ActionLevelVulnerableHome, SuspectedServiceLine], ["summary.water.urgent", "care.vulnerable-water"]),
+            [Urgent, ActionLevelVulnerableHome, SuspectedServiceLine], ["summary.water.urgent", "care.vulnerable-urgent", "step.bottled-only"],
+            ["care.vulnerable-water", "step.filter", "step.run-tap"]),
         ["child, not detected"] = new(Water(Home(child: true), NotDetected(BottleType.FirstDraw)), Band.NotDetected, null, [],
             ["care.blood-test"], ["care.vulnerable-water", "care.blood-test-soon"]),
         ["private well, flushed high"] = new(Water(Home(well: true), First(3), Flushed(12)), Band.Action, ServiceLineOrFurther,
@@ -95,7 +118,13 @@ internal static class InterpreterCases
         ["standing time short"] = new(Water(First(8), Flushed(2)).With(ValidityIssueCode.StandingTimeShort), Band.Retest, NoSourceAtThisTap,
             [RetestNeeded], ["summary.retest", "retest.standing-time-short", "step.retest-water"], ["result.low", "pattern.none"]),
         ["QC held, very high"] = new(Water(First(70)).With(ValidityIssueCode.QcHeld), Band.Retest, null, [Urgent, ActionLevel, RetestNeeded],
-            ["retest.qc-held", "step.filter"], ["result.urgent", "step.use-filtered"]),
+            ["retest.qc-held", "retest.high-other", "result.urgent", "step.bottled-only"], ["step.filter", "step.use-filtered", "retest.high-short-standing"]),
+        // Found by a health educator: 3 h standing, 10.7 and 11.8 µg/L, told only "we cannot rely on this sample". Short
+        // standing biases lead low (DOMAIN.md §6 [practice]): show the results, start the precautions now, retest.
+        ["standing time short, already at the level"] = new(Water(First(10.7), Flushed(11.8)).With(ValidityIssueCode.StandingTimeShort),
+            Band.Retest, ServiceLineOrFurther, [ActionLevel, SuspectedServiceLine, RetestNeeded],
+            ["summary.retest", "retest.standing-time-short", "retest.high-short-standing", "result.action", "step.retest-water", "step.use-filtered"],
+            ["step.run-tap", "retest.high-other"]),
         ["outside holding time"] = new(Water(First(3)).With(ValidityIssueCode.OutsideHoldingTime), Band.Retest, null, [RetestNeeded],
             ["retest.outside-holding-time"]),
         ["collection invalid"] = new(Water(First(3)).With(ValidityIssueCode.CollectionInvalid), Band.Retest, null, [RetestNeeded],
@@ -146,11 +175,24 @@ internal static class InterpreterCases
         ["soil, profile without soil levels"] = new(SoilKit(Home(), Soil(PlayArea, 450)), Band.Low, null, [], ["soil.measured"]),
         ["soil not detected"] = new(SoilKit(Home(), SoilNotDetected(PlayArea)), Band.NotDetected, null, [],
             ["summary.soil.not-detected", "soil.not-detected"], Profile: Levels.SoilHazard),
-        ["soil, private well home"] = new(SoilKit(Home(well: true), Soil(DripLine, 1500)), Band.Action, null, [ActionLevel], ["closing.well"],
+        ["soil, private well home"] = new(SoilKit(Home(well: true), Soil(DripLine, 1500)), Band.Action, null, [ActionLevel], ["closing.soil"],
             Profile: Levels.SoilHazard),
         ["soil, QC held"] = new(SoilKit(Home(), Soil(PlayArea, 300)).With(ValidityIssueCode.QcHeld), Band.Retest, null, [RetestNeeded],
             ["step.retest-soil", "retest.qc-held"], ["soil.below"], Profile: Levels.SoilHazard),
         ["soil, place not recorded"] = new(SoilKit(Home(), Soil(null, 420)), Band.Action, null, [ActionLevel], ["soil.above"], Profile: Levels.SoilHazard),
+        // Found by a health educator: 940 mg/kg under the roof edge was "below that level" and low against the 1,200 mg/kg
+        // hazard standard alone. EPA's 2024 screening level is 200 mg/kg (EPA Updated Residential Soil Lead Guidance);
+        // near the drip line the usual source is old exterior paint (DOMAIN.md §5).
+        ["drip line 940, hazard and screening"] = new(SoilKit(Home(built: 1995), Soil(DripLine, 940)), Band.Advisory, null, [],
+            ["summary.soil.above-screening", "soil.above-screening", "soil.drip-line-paint", "step.soil-play", "step.soil-cover", "step.soil-clean",
+                "step.soil-garden", "step.soil-paint", "closing.soil"],
+            ["soil.below", "summary.soil.low", "service-line.lead", "step.run-tap", "closing.public"], Profile: Levels.SoilHazardAndScreening),
+        ["yard 150, hazard and screening"] = new(SoilKit(Home(built: 1995), Soil(Yard, 150)), Band.Low, null, [],
+            ["summary.soil.low", "soil.below-screening"], ["step.soil-paint"], Profile: Levels.SoilHazardAndScreening),
+        ["yard 150, old house, hazard and screening"] = new(SoilKit(Home(built: 1950), Soil(Yard, 150)), Band.Advisory, null, [],
+            ["soil.above-screening", "soil.other-source", "step.soil-paint"], Profile: Levels.SoilHazardAndScreening),
+        ["play area 450, hazard and screening"] = new(SoilKit(Home(built: 1995), Soil(PlayArea, 450)), Band.Action, null, [ActionLevel],
+            ["summary.soil.above", "soil.above"], ["soil.above-screening"], Profile: Levels.SoilHazardAndScreening),
         ["soil, limit above screening"] = new(SoilKit(Home(built: 1950), SoilNotDetected(Yard, reportingLimit: 120)), Band.Advisory, null, [],
             ["soil.reporting-limit-at-level"], Profile: Levels.SoilScreening),
     };

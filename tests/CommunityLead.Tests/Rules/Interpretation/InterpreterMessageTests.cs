@@ -45,6 +45,8 @@ public class InterpreterMessageTests(ITestOutputHelper output)
         ["level"] = MessageWords.Amount(level, unit),
         ["rl"] = MessageWords.Amount(rl, unit),
         ["margin"] = MessageWords.Amount(margin, unit),
+        ["urgent"] = MessageWords.Amount(Math.Max(level * 5, 50), unit),
+        ["hazard"] = MessageWords.Amount(Math.Max(level * 3, 400), unit),
     };
 
     [Fact]
@@ -113,7 +115,7 @@ public class InterpreterMessageTests(ITestOutputHelper output)
         {
             var last = o.Outcome.Messages[^1];
             var well = o.Kit.Household.WaterSource == CommunityLead.Rules.Households.WaterSource.PrivateWell;
-            Assert.Equal(well ? "closing.well" : "closing.public", last.Code);
+            Assert.Equal(o.Kit.Kind == CommunityLead.Rules.Kits.KitKind.Soil ? "closing.soil" : well ? "closing.well" : "closing.public", last.Code);
             Assert.Contains("not medical advice", last.En);
             Assert.Contains("no es un consejo médico", last.Es);
             Assert.Contains("health department", last.En);

@@ -69,4 +69,21 @@ internal static class Levels
         Level(Lead, Soil, SoilLevel, 200, "mg/kg", "Residential screening level", "EPA 2024 soil lead guidance"),
         Level(Lead, Soil, SoilLevel, 100, "mg/kg", "Screening level, another lead source", "EPA 2024 soil lead guidance", otherSource: true),
     ]);
+
+    // Lead 10 µg/L (89 FR 86418) and, for copper, only the 1.0 mg/L secondary standard (40 CFR 143.3): a copper
+    // result below it is below "our level", which is not an action level.
+    public static readonly RuleProfile CopperTasteOnly = new("copper-taste-only", 1, "Lead action level, copper taste level", "US",
+    [
+        Level(Lead, Water, ActionLevel, 10, UgL, "US action level (LCRI)", "89 FR 86418"),
+        Level(Copper, Water, Aesthetic, 1.0, "mg/L", "Secondary standard: taste and staining", "40 CFR 143.3"),
+    ]);
+
+    // Both, as the shipped us-soil-hazard v2 holds them: the hazard standards (40 CFR 745.65) as soil levels and the
+    // EPA 2024 residential screening levels (200 ppm; 100 ppm with another lead source) as soil advisories.
+    public static readonly RuleProfile SoilHazardAndScreening = new("soil-745-65-epa-2024", 1, "Soil-lead hazard and EPA screening", "US",
+    [
+        .. SoilHazard.Levels,
+        Level(Lead, Soil, Advisory, 200, "mg/kg", "Residential screening level", "EPA 2024 soil lead guidance"),
+        Level(Lead, Soil, Advisory, 100, "mg/kg", "Screening level, another lead source", "EPA 2024 soil lead guidance", otherSource: true),
+    ]);
 }

@@ -72,11 +72,18 @@ public class ProfileValueTests
     public void UsSoilHazard_Levels_MatchPublishedValues()
     {
         var p = Load("us-soil-hazard");
-        Assert.Equal(2, p.Levels.Count);
+        Assert.Equal(4, p.Levels.Count);
         var playArea = Soil(p, 400, "40 CFR 745.65", SoilLocation.PlayArea); // 40 CFR 745.65: 400 ppm bare soil in play areas [published]
         Assert.Equal([SoilLocation.PlayArea], playArea.AppliesTo!);
         foreach (var rest in new[] { SoilLocation.Garden, SoilLocation.DripLine, SoilLocation.Yard })
             Soil(p, 1200, "40 CFR 745.65", rest); // 40 CFR 745.65: 1,200 ppm average bare soil in the rest of the yard [published]
+        // Version 2 judges every place against the EPA residential screening levels too, as soil advisories.
+        Assert.Equal(2, p.Version);
+        foreach (var location in Enum.GetValues<SoilLocation>())
+        {
+            Soil(p, 200, "EPA Updated Residential Soil Lead Guidance", location, kind: LevelKind.Advisory); // EPA soil lead guidance, 2024-01-17: 200 ppm [published]
+            Soil(p, 100, "EPA Updated Residential Soil Lead Guidance", location, otherLeadSource: true, kind: LevelKind.Advisory); // EPA 2024: 100 ppm with another lead source [published]
+        }
     }
 
     [Fact]
@@ -114,9 +121,10 @@ public class ProfileValueTests
         return level;
     }
 
-    private static ProfileLevel Soil(RuleProfile p, double value, string source, SoilLocation at, bool otherLeadSource = false)
+    private static ProfileLevel Soil(RuleProfile p, double value, string source, SoilLocation at, bool otherLeadSource = false,
+        LevelKind kind = LevelKind.SoilLevel)
     {
-        var level = Single(p, Analyte.Lead, Matrix.Soil, LevelKind.SoilLevel, at, otherLeadSource);
+        var level = Single(p, Analyte.Lead, Matrix.Soil, kind, at, otherLeadSource);
         Assert.Equal(value, level.Value);
         Assert.Equal(Units.MilligramsPerKilogram, level.Unit);
         Assert.Contains(source, level.Source);

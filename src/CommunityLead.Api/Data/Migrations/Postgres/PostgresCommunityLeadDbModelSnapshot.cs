@@ -84,6 +84,9 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasMaxLength(500)
                         .HasColumnType("character varying(500)");
 
+                    b.Property<int?>("InterpretationId")
+                        .HasColumnType("integer");
+
                     b.Property<string>("KitCode")
                         .IsRequired()
                         .HasMaxLength(16)
@@ -116,6 +119,8 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasColumnType("character varying(100)");
 
                     b.HasKey("Id");
+
+                    b.HasIndex("InterpretationId");
 
                     b.HasIndex("KitId");
 
@@ -876,11 +881,18 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
 
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.AttentionItem", b =>
                 {
+                    b.HasOne("CommunityLead.Api.Data.Entities.KitInterpretation", "Interpretation")
+                        .WithMany()
+                        .HasForeignKey("InterpretationId")
+                        .OnDelete(DeleteBehavior.Restrict);
+
                     b.HasOne("CommunityLead.Api.Data.Entities.Kit", null)
                         .WithMany()
                         .HasForeignKey("KitId")
                         .OnDelete(DeleteBehavior.Restrict)
                         .IsRequired();
+
+                    b.Navigation("Interpretation");
                 });
 
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Collection", b =>

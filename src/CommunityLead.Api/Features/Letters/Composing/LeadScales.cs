@@ -83,8 +83,18 @@ internal static class LeadScales
         return marks;
     }
 
-    private static List<(double Value, Phrase Label)> SoilMarks(Finding f) =>
-        f.LevelValue is { } soil ? [(soil, SampleWords.SoilLevel)] : [];
+    /// <summary>
+    /// The level that decided, and the hazard standard beside a screening level: a 940 mg/kg drip-line sample is
+    /// above the 200 screening level and below the 1,200 hazard standard, and the household should see both.
+    /// </summary>
+    private static List<(double Value, Phrase Label)> SoilMarks(Finding f)
+    {
+        if (f.LevelValue is not { } level) return [];
+        if (!f.ScreeningLevel) return [(level, SampleWords.SoilLevel)];
+        List<(double Value, Phrase Label)> marks = [(level, SampleWords.SoilScreeningLevel)];
+        if (f.HazardLevel is { } hazard && hazard != level) marks.Add((hazard, SampleWords.SoilHazardLevel));
+        return marks;
+    }
 
     /// <summary>The smallest of 1, 1.5, 2, 2.5, 3, 4, 5, 6, 8 times a power of ten that is at least <paramref name="value"/>.</summary>
     public static double RoundUp(double value)

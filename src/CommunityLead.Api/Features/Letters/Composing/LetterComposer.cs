@@ -36,12 +36,12 @@ public static class LetterComposer
             Contacts.Recipient(recipient),
             LetterWords.Title(kind, soil).In(language),
             KitFacts(kitCode, collectedOn, soil, language),
-            retest ? null : ResultRows.Table(interpretation.Findings, levels, profileName, language),
+            retest && !ShowsHighResults(interpretation) ? null : ResultRows.Table(interpretation.Findings, levels, profileName, language),
             scales,
             new LetterSection((retest ? LetterWords.RetestHeading : LetterWords.MeaningHeading).In(language), sections.Meaning),
             new LetterSection(LetterWords.StepsHeading.In(language), sections.Steps, Numbered: true),
             new LetterSection(LetterWords.CautionsHeading.In(language), sections.Cautions),
-            new LetterSection(LetterWords.WhoToCallHeading.In(language), Contacts.WhoToCall(settings, language, privateWell, childOrPregnancy)),
+            new LetterSection(LetterWords.WhoToCallHeading.In(language), Contacts.WhoToCall(settings, language, privateWell, childOrPregnancy, soil)),
             closing,
             LetterWords.Footer(settings.ProgramName, kitCode).In(language),
             LetterWords.Greeting(recipient.Name).In(language),
@@ -59,6 +59,13 @@ public static class LetterComposer
         if (soil) facts.Add(new(LetterWords.TestKind.In(language), LetterWords.SoilTest.In(language)));
         return facts;
     }
+
+    /// <summary>
+    /// A retest letter gives no numbers, except when a result already reached a level: then the household sees it
+    /// (the interpreter says so with a retest.high-* message), since a doubtful sample is no reason to hide a danger.
+    /// </summary>
+    private static bool ShowsHighResults(KitOutcome interpretation) =>
+        interpretation.Messages.Any(m => m.Code == MessageCatalog.RetestHighShortStanding.Code || m.Code == MessageCatalog.RetestHighOther.Code);
 
     /// <summary>A soil kit has soil findings, or (a retest with nothing to judge) the soil retest step.</summary>
     private static bool IsSoil(KitOutcome interpretation) =>

@@ -27,7 +27,9 @@ internal static class ResultRows
     {
         if (f.LevelValue is not { } level) return null;
         if (f.Bottle == BottleType.Soil)
-            return f.Soil is { } comparison ? SampleWords.SoilComparedWith(comparison, level, f.Unit) : null;
+            return f.Soil is { } comparison ? SampleWords.SoilComparedWith(comparison, level, f.Unit, f.ScreeningLevel) : null;
+        if (f.Band == Band.Urgent && levels.Of(f.Analyte).Action is { } action)
+            return SampleWords.UrgentLevels(action, level, f.Unit);
         return SampleWords.Level(Name(f, level, levels.Of(f.Analyte)), level, f.Unit);
     }
 

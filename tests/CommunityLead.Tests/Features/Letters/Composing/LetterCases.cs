@@ -103,11 +103,28 @@ internal static class LetterCases
     public static readonly LetterCase Sequential = new("sequential", new KitFacts(KitKind.WaterSequential, Collected, Home(),
         [Lead(BottleType.Sequential, 2.0, 1), Lead(BottleType.Sequential, 4.0, 2), Lead(BottleType.Sequential, 40.0, 3)], []), Profiles.UsLcri);
 
-    // The cases a health educator looks at side by side: an urgent result, a result far past every level, a soil
-    // result just under its level, and a sequential profile of five bottles.
-    public static readonly LetterCase Urgent = new("urgent", Water(Home(),
-        [Lead(BottleType.FirstDraw, 75), Lead(BottleType.Flushed, 18)]), Profiles.UsLcri);
+    // The letters a health educator read and found wrong, now each a case (see InterpreterAdviceTests for the rules).
+    public static readonly LetterCase NotDetected = new("not detected", Water(Home(),
+        [LeadNotDetected(BottleType.FirstDraw), LeadNotDetected(BottleType.Flushed)]), Profiles.UsLcri);
 
+    public static readonly LetterCase ActionFaucet = new("action level, faucet", Water(Home(),
+        [Lead(BottleType.FirstDraw, 40), Lead(BottleType.Flushed, 6.2)]), Profiles.UsLcri);
+
+    public static readonly LetterCase Urgent = new("urgent", Water(Home(child: true),
+        [Lead(BottleType.FirstDraw, 75), Lead(BottleType.Flushed, 20)]), Profiles.UsLcri);
+
+    public static readonly LetterCase CopperOnly = new("copper only", Water(Home(),
+        [Lead(BottleType.FirstDraw, 2.1), Copper(1.31)]), Profiles.UsLcri);
+
+    public static readonly LetterCase RetestHigh = new("retest, already at the level", Water(Home(),
+        [Lead(BottleType.FirstDraw, 10.7), Lead(BottleType.Flushed, 11.8)],
+        [new ValidityIssue(ValidityIssueCode.StandingTimeShort, "Water stood 3 h; at least 6 h is needed.")]), Profiles.UsLcri);
+
+    public static readonly LetterCase SoilDripLine = new("soil, drip line 940", new KitFacts(KitKind.Soil, Collected, Home(),
+        [Soil(SoilLocation.DripLine, 940, 0), Soil(SoilLocation.PlayArea, 150, 10)], []), Profiles.SoilHazardAndScreening);
+
+    // The scale cases: a result far past every level, a soil result just under the hazard standard, and a
+    // sequential profile of five bottles.
     public static readonly LetterCase VeryHigh = new("very high", Water(Home(child: true),
         [Lead(BottleType.FirstDraw, 2000), Lead(BottleType.Flushed, 9)]), Profiles.UsLcri);
 
@@ -118,6 +135,6 @@ internal static class LetterCases
         [Lead(BottleType.Sequential, 3.0, 1), Lead(BottleType.Sequential, 4.5, 2), Lead(BottleType.Sequential, 16.0, 3),
             Lead(BottleType.Sequential, 7.5, 4), Lead(BottleType.Sequential, 2.2, 5)], []), Profiles.UsLcri);
 
-    public static readonly LetterCase[] English =
-        [Low, ActionWithChild, ServiceLine, Retest, Corrected, SoilUncertain, PrivateWell, Sequential, Urgent, VeryHigh, SoilNearLevel, SequentialFive];
+    public static readonly LetterCase[] English = [Low, ActionWithChild, ServiceLine, Retest, Corrected, SoilUncertain, PrivateWell, Sequential,
+        NotDetected, ActionFaucet, Urgent, CopperOnly, RetestHigh, SoilDripLine, VeryHigh, SoilNearLevel, SequentialFive];
 }

@@ -19,8 +19,8 @@ public class LetterResultsTests
         Assert.Equal<IEnumerable<string>>(
         [
             ["First water from the tap (first draw)", "Lead", "2.1 µg/L", ActionLevel],
-            // Copper below everything: compared with its lowest level, the 1.0 mg/L taste level (40 CFR 143.3).
-            ["First water from the tap (first draw)", "Copper", "0.12 mg/L", "Taste level 1 mg/L"],
+            // Copper below everything: compared with its action level, 1.3 mg/L (40 CFR 141.80(c)), as its sentence says.
+            ["First water from the tap (first draw)", "Copper", "0.12 mg/L", "Action level 1.3 mg/L"],
             ["After running the tap (flushed)", "Lead", "Not detected (below 1 µg/L)", ActionLevel],
         ], table.Rows);
         Assert.Contains("US federal, Lead and Copper Rule Improvements", table.Note);

@@ -39,6 +39,19 @@ public class LetterScaleAxisTests
     }
 
     [Fact]
+    public void Compose_SoilJudgedOnTheScreeningLevel_BarShowsTheHazardStandardToo()
+    {
+        var scales = SoilDripLine.Compose().Scales;
+
+        // EPA 2024 residential screening level 200 mg/kg (Updated Residential Soil Lead Guidance) beside the hazard
+        // standards of 40 CFR 745.65: 400 in a play area, 1,200 elsewhere in the yard. 940 under the roof edge is above
+        // the first and below the second, and the bar must show both, so it reads as neither safe nor a hazard.
+        Assert.Equal([(150.0, new[] { 200.0, 400 }), (940, new[] { 200.0, 1200 })],
+            scales.Select(s => (s.Value, s.Levels.Select(l => l.Value).ToArray())));
+        Assert.All(scales, s => Assert.Equal(["EPA screening level", "Federal hazard level"], s.Levels.Select(l => l.Label)));
+    }
+
+    [Fact]
     public void Compose_ResultFarAboveEveryLevel_AxisBreaksPastTheLevels()
     {
         var letter = VeryHigh.Compose();

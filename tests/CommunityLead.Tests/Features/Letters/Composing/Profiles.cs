@@ -8,8 +8,8 @@ namespace CommunityLead.Tests.Features.Letters.Composing;
 internal static class Profiles
 {
     private static ProfileLevel Level(Analyte analyte, Matrix matrix, LevelKind kind, double value, string unit, string source,
-        SoilLocation[]? appliesTo = null) =>
-        new(analyte, matrix, kind, value, unit, "A level for the letter tests.", source, "published", appliesTo);
+        SoilLocation[]? appliesTo = null, bool otherSource = false) =>
+        new(analyte, matrix, kind, value, unit, "A level for the letter tests.", source, "published", appliesTo, otherSource);
 
     // Lead 10 µg/L action level: Lead and Copper Rule Improvements, 89 FR 86418 (2024-10-30).
     // Copper 1.3 mg/L action level: 40 CFR 141.80(c); copper 1.0 mg/L secondary standard (taste, staining): 40 CFR 143.3.
@@ -41,4 +41,17 @@ internal static class Profiles
         Level(Analyte.Lead, Matrix.Soil, LevelKind.SoilLevel, 1200, Units.MilligramsPerKilogram, "40 CFR 745.65",
             [SoilLocation.Garden, SoilLocation.DripLine, SoilLocation.Yard]),
     ]);
+
+    // The shipped us-soil-hazard v2: the hazard standards above plus EPA's residential screening levels (EPA Updated
+    // Residential Soil Lead Guidance, 2024-01-17: 200 ppm; 100 ppm where the home has another lead source).
+    public static readonly RuleProfile SoilHazardAndScreening = SoilHazard with
+    {
+        Version = 2,
+        Levels =
+        [
+            .. SoilHazard.Levels,
+            Level(Analyte.Lead, Matrix.Soil, LevelKind.Advisory, 200, Units.MilligramsPerKilogram, "EPA 2024 soil lead guidance"),
+            Level(Analyte.Lead, Matrix.Soil, LevelKind.Advisory, 100, Units.MilligramsPerKilogram, "EPA 2024 soil lead guidance", otherSource: true),
+        ],
+    };
 }
