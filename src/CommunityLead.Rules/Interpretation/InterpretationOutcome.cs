@@ -44,6 +44,8 @@ public enum AttentionFlag
 
 /// <param name="LevelValue">The level the value was compared with, in <paramref name="Unit"/>; null when none applies.</param>
 /// <param name="ScreeningLevel">Soil: <paramref name="LevelValue"/> is a screening level, not a hazard standard.</param>
+/// <param name="HazardLevel">Soil: the hazard standard for the sample's place, also when the screening level decided
+/// (so a letter's scale can show both); null for water and where the profile has no hazard standard.</param>
 public sealed record Finding(
     BottleType Bottle,
     int? Position,
@@ -56,7 +58,8 @@ public sealed record Finding(
     double? LevelValue,
     string? LevelMeaning,
     SoilComparison? Soil = null,
-    bool ScreeningLevel = false);
+    bool ScreeningLevel = false,
+    double? HazardLevel = null);
 
 /// <summary>Where lead peaked in a sequential profile, and the length of pipe that much water fills.</summary>
 public sealed record SequentialPeak(int Position, double PeakValue, double LitresBeforePeak, double PipeMetres);

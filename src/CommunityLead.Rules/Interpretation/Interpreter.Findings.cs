@@ -68,7 +68,7 @@ public static partial class Interpreter
         };
         var finding = new Finding(result.Bottle, result.Position, result.Location, result.Analyte, result.Value,
             Analytes.NormalUnit(result.Analyte, Matrix.Soil), result.BelowReportingLimit, band, level?.Value, level?.Meaning, comparison,
-            ScreeningLevel: level is not null && level == screening);
+            ScreeningLevel: level is not null && level == screening, HazardLevel: hazard?.Value);
         return new Judged(finding, result.ReportingLimit, Margin: margin, OtherSourceLevel: level?.OnlyWithOtherLeadSource ?? false,
             Hazard: hazard?.Value, Screening: finding.ScreeningLevel);
     }

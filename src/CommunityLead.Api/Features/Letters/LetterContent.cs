@@ -18,6 +18,9 @@ public enum PaperSize { Letter, A4 }
 /// Everything printed on one household letter, already worded in the letter's language. The layout only
 /// places it; it decides no wording. Built by the composer from the interpretation and the program's settings.
 /// </summary>
+/// <param name="Greeting">"Dear Ana Quill," above the results; null in letters stored before letters had one.</param>
+/// <param name="Signature">Who signs, after the closing line; null in letters stored before letters were signed.</param>
+/// <param name="ScaleNote">One line under the scales saying how to read a broken bar; null when no bar is broken.</param>
 public sealed record LetterContent(
     LetterLanguage Language,
     LetterKind Kind,
@@ -34,7 +37,10 @@ public sealed record LetterContent(
     LetterSection Cautions,
     LetterSection WhoToCall,
     string Closing,
-    string Footer);
+    string Footer,
+    string? Greeting = null,
+    LetterSignature? Signature = null,
+    string? ScaleNote = null);
 
 /// <summary>The sender block: program name, postal address lines, and how to reach it.</summary>
 public sealed record ProgramBlock(string Name, IReadOnlyList<string> AddressLines, IReadOnlyList<string> ContactLines);
@@ -47,11 +53,20 @@ public sealed record ResultTable(IReadOnlyList<string> Headers, IReadOnlyList<IR
 
 /// <summary>
 /// A horizontal scale for one lead result, marked against the levels: people see at a glance where they stand.
-/// Values in the same unit; <see cref="Maximum"/> is where the scale ends (the marker is clamped to it).
+/// Values in the same unit; <see cref="Maximum"/> is where the scale ends (the marker is clamped to it). Every
+/// scale of one matrix in a letter has the same levels, end and break, so bars can be compared.
 /// </summary>
-public sealed record LeadScale(string Label, double Value, string ValueText, IReadOnlyList<ScaleMark> Levels, double Maximum, string Unit);
+/// <param name="BreakAt">
+/// Where a broken axis breaks: drawn to size from 0 to here, then squeezed up to <see cref="Maximum"/>, so a result
+/// far above every level does not crush the levels into the bar's first few millimetres. Null: to size throughout.
+/// </param>
+public sealed record LeadScale(string Label, double Value, string ValueText, IReadOnlyList<ScaleMark> Levels, double Maximum, string Unit,
+    double? BreakAt = null);
 
 public sealed record ScaleMark(double Value, string Label);
+
+/// <summary>The sign-off after the closing line: "Sincerely," then the staff member's name and title.</summary>
+public sealed record LetterSignature(string SignOff, string Name, string? Title);
 
 /// <param name="Numbered">True for steps to follow (1., 2., ...); false for plain paragraphs.</param>
 public sealed record LetterSection(string Heading, IReadOnlyList<string> Paragraphs, bool Numbered = false);

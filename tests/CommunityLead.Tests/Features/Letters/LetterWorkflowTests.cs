@@ -32,6 +32,8 @@ public class LetterWorkflowTests
         Assert.InRange(letter.Pages, 1, 2);
         var text = letter.Flat;
         Assert.Contains("Perpetua Nettleford", text);
+        Assert.Contains("Dear Perpetua Nettleford,", text);
+        Assert.Contains("Sincerely, Dana Whitfield Program Coordinator", text); // the signer, from the Letters settings
         Assert.DoesNotContain("Isidore Ivesby", text);        // no data of another household
         Assert.Contains(code, text);
         Assert.Contains("12.4 µg/L", text);
@@ -57,6 +59,8 @@ public class LetterWorkflowTests
         var spanish = LetterPdfText.Read((await LetterAsync(flow.Coordinator, code)).Pdf).Flat;
         Assert.Contains("plomo", spanish);
         Assert.Contains("consejo médico", spanish);
+        Assert.Contains("Hola, ", spanish);
+        Assert.Contains("Atentamente, Dana Whitfield Coordinación del programa", spanish);
         Assert.DoesNotContain("not medical advice", spanish, StringComparison.OrdinalIgnoreCase);
         // The levels' source is named in the letter's language (the us-lcri profile's "nameEs").
         Assert.Contains("Mejoras a la Regla sobre el Plomo y el Cobre", spanish);

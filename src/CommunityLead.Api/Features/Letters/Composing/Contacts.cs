@@ -14,6 +14,16 @@ internal static class Contacts
         return new ProgramBlock(settings.ProgramName, settings.ProgramAddress, contact);
     }
 
+    /// <summary>The staff member named in the settings signs, with their title in the letter's language; else the program's team.</summary>
+    public static LetterSignature Signature(LetterSettings settings, LetterLanguage language)
+    {
+        var signOff = LetterWords.SignOff.In(language);
+        if (string.IsNullOrWhiteSpace(settings.StaffName))
+            return new LetterSignature(signOff, LetterWords.Team(settings.ProgramName).In(language), null);
+        var title = language == LetterLanguage.Es && !string.IsNullOrWhiteSpace(settings.StaffTitleEs) ? settings.StaffTitleEs : settings.StaffTitle;
+        return new LetterSignature(signOff, settings.StaffName.Trim(), string.IsNullOrWhiteSpace(title) ? null : title.Trim());
+    }
+
     /// <summary>US order for the envelope window: name, street lines, then "City, Region Postal code".</summary>
     public static IReadOnlyList<string> Recipient(LetterRecipient to)
     {

@@ -28,6 +28,7 @@ public static class LetterComposer
         var sections = MessageSections.Sort(interpretation.Messages, language, kind);
         var closing = sections.Closing
             ?? (privateWell ? MessageCatalog.ClosingWell : MessageCatalog.ClosingPublic).Fill().In(language);
+        IReadOnlyList<LeadScale> scales = retest ? [] : LeadScales.For(interpretation.Findings, levels, language);
 
         return new LetterContent(language, kind, settings.Paper,
             Contacts.Program(settings, language),
@@ -36,13 +37,16 @@ public static class LetterComposer
             LetterWords.Title(kind, soil).In(language),
             KitFacts(kitCode, collectedOn, soil, language),
             retest && !ShowsHighResults(interpretation) ? null : ResultRows.Table(interpretation.Findings, levels, profileName, language),
-            retest ? [] : LeadScales.For(interpretation.Findings, levels, language),
+            scales,
             new LetterSection((retest ? LetterWords.RetestHeading : LetterWords.MeaningHeading).In(language), sections.Meaning),
             new LetterSection(LetterWords.StepsHeading.In(language), sections.Steps, Numbered: true),
             new LetterSection(LetterWords.CautionsHeading.In(language), sections.Cautions),
             new LetterSection(LetterWords.WhoToCallHeading.In(language), Contacts.WhoToCall(settings, language, privateWell, childOrPregnancy, soil)),
             closing,
-            LetterWords.Footer(settings.ProgramName, kitCode).In(language));
+            LetterWords.Footer(settings.ProgramName, kitCode).In(language),
+            LetterWords.Greeting(recipient.Name).In(language),
+            Contacts.Signature(settings, language),
+            scales.Any(s => s.BreakAt is not null) ? LetterWords.ScaleBreakNote.In(language) : null);
     }
 
     private static IReadOnlyList<LabeledValue> KitFacts(string kitCode, DateOnly collectedOn, bool soil, LetterLanguage language)

@@ -55,6 +55,8 @@ internal static partial class LetterPhrases
         (SampleWords.UrgentLevel, "urgent", "the program's urgent level for lead"),
         (SampleWords.LowestLevel, "lowest", "a level whose kind the letter can't tell"),
         (SampleWords.SoilLevel, "soil", "the soil level for the sample's place"),
+        (SampleWords.SoilScreeningLevel, "soil-screening", "EPA's residential soil screening level, when it decided the soil result"),
+        (SampleWords.SoilHazardLevel, "soil-hazard", "the federal soil hazard standard, beside the screening level"),
     ];
 
     private static Finding Sample(BottleType bottle, SoilLocation? place) =>

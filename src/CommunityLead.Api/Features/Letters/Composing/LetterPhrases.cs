@@ -72,6 +72,14 @@ internal static partial class LetterPhrases
             "Under the results table, every results letter: names the rule profile (in the letter's language).");
         yield return Filled("letter-words.footer", LetterWordsFile, p => LetterWords.Footer(p.Program, p.Kit), (Program: "{programName}", Kit: "{kitCode}"),
             (Program: "Brindle Cove Tap Check", Kit: "7KQ4-M2XD-H"), "Footer of every page.");
+        yield return Filled("letter-words.greeting", LetterWordsFile, LetterWords.Greeting, "{name}", "Rosa Quill",
+            "First line of the letter, above the title, when the household has a name.");
+        yield return Fixed("letter-words.greeting-no-name", LetterWordsFile, LetterWords.Greeting(""), "First line of the letter when no name is on file.");
+        yield return Fixed("letter-words.sign-off", LetterWordsFile, LetterWords.SignOff, "Above the signature, every letter.");
+        yield return Filled("letter-words.team", LetterWordsFile, LetterWords.Team, "{programName}", "Brindle Cove Tap Check",
+            "Signature when the Letters settings name no staff member.");
+        yield return Fixed("letter-words.scale-break-note", LetterWordsFile, LetterWords.ScaleBreakNote,
+            "Under the scales, when a result is so far above the levels that its bar is cut (broken axis).");
     }
 
     private static IEnumerable<LetterPhrase> Calls()

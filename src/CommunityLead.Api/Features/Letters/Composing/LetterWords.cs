@@ -44,6 +44,24 @@ internal static class LetterWords
         $"Each result is compared with the level next to it. These levels come from: {profileName}.",
         $"Cada resultado se compara con el nivel que aparece a su lado. Estos niveles provienen de: {profileName}.");
 
+    /// <summary>
+    /// "Dear Ana Quill," and "Hola, Ana Quill:". Spanish letters open with a colon; "Estimado" or "Estimada" would
+    /// have to guess who reads the letter, and "Hola" is warm without guessing. No name: a plain hello.
+    /// </summary>
+    public static Phrase Greeting(string name) => string.IsNullOrWhiteSpace(name)
+        ? new("Hello,", "Hola:")
+        : new($"Dear {name.Trim()},", $"Hola, {name.Trim()}:");
+
+    public static readonly Phrase SignOff = new("Sincerely,", "Atentamente,");
+
+    /// <summary>Who signs when the settings name nobody: the program's team.</summary>
+    public static Phrase Team(string programName) => new($"The {programName} team", $"El equipo de {programName}");
+
+    /// <summary>Under the scales when an axis is broken: the bar is drawn with "//" where it breaks.</summary>
+    public static readonly Phrase ScaleBreakNote = new(
+        "A bar with // is cut there so a very high result fits. After the cut, the bar is not drawn to size.",
+        "Una barra con // está cortada ahí para que quepa un resultado muy alto. Después del corte, la barra no está a escala.");
+
     public static Phrase Footer(string programName, string kitCode) =>
         new($"{programName} · Kit code {kitCode}", $"{programName} · Código del kit {kitCode}");
 }

@@ -47,6 +47,8 @@ internal static class SampleWords
     public static readonly Phrase UrgentLevel = new("Urgent level", "Nivel urgente");
     public static readonly Phrase LowestLevel = new("Our level", "Nuestro nivel");
     public static readonly Phrase SoilLevel = new("Level for this place", "Nivel para este lugar");
+    public static readonly Phrase SoilScreeningLevel = new("EPA screening level", "Nivel de evaluación de la EPA");
+    public static readonly Phrase SoilHazardLevel = new("Federal hazard level", "Nivel federal de peligro");
 
     /// <summary>An urgent result names both levels, as its sentence does: "Action level 10 µg/L; urgent from 50 µg/L".</summary>
     public static Phrase UrgentLevels(double action, double urgent, string unit) =>

@@ -4,48 +4,56 @@ using PdfSharp.Drawing;
 namespace CommunityLead.Api.Features.Letters.Layout;
 
 /// <summary>
-/// One lead result as a picture: a bar from 0 to the scale's end, darker past each level, a labelled tick at
-/// every level, and a marker at the result with its value written beside it. Labels carry the meaning,
-/// the greys only repeat it.
+/// One lead result as a picture, in one block: its caption, a bar across the whole line (so bars sharing an axis line
+/// up), darker past each level, a tick at every level, the result's marker with its value above the bar, and under
+/// the bar the axis numbers and the levels' labels. Labels carry the meaning, the greys only repeat it.
 /// </summary>
 internal static class LeadScaleBlocks
 {
-    private const double BarHeight = 10;
+    private const double BarHeight = 9;
     private const double TickOverhang = 3;
-    private const double AxisGap = 5;
+    private const double CaptionGap = 12;
 
-    public static IEnumerable<Block> Build(
-        TextMeasure measure, LetterFonts fonts, LeadScale scale, LetterLanguage language, double x, double width, double spaceBefore)
+    public static Block Build(TextMeasure measure, LetterFonts fonts, LeadScale scale, LetterLanguage language, double x, double width)
     {
-        var caption = ParagraphBlocks.Lines(measure, scale.Label, fonts.BodyBold, Palette.Ink, x, width, spaceBefore).ToList();
-        caption[^1] = caption[^1] with { KeepWithNext = true };
-        foreach (var line in caption)
-            yield return line;
+        var axis = ScaleAxis.For(scale, x, x + width);
+        var captionFont = fonts.BodyBold;
+        var caption = measure.Wrap(scale.Label, captionFont, width);
+        var lineHeight = Typeset.LineHeight(captionFont);
+        var marker = ScaleMarker.Plan(measure, fonts.BodyBold, scale.ValueText, axis.XOf(scale.Value), x, x + width);
+        // The value shares the caption's last line when it clears it, saving a line per scale.
+        var shared = marker.OneLine && x + measure.Width(caption[^1], captionFont) + CaptionGap <= marker.Extent.Left;
+        var barTop = shared ? caption.Count * lineHeight + 1 : caption.Count * lineHeight + marker.Height;
 
-        // A scale without a usable end still gets one, so the marker and ticks have somewhere to go.
-        var maximum = scale.Maximum > 0 ? scale.Maximum : Math.Max(1, scale.Levels.Select(l => l.Value).DefaultIfEmpty(1).Max());
-        const string zero = "0";
-        var end = (ScaleNumber.Format(maximum, language) + " " + scale.Unit).Trim();
-        var barLeft = x + measure.Width(zero, fonts.Small) + AxisGap;
-        var barRight = x + width - measure.Width(end, fonts.Small) - AxisGap;
-        double XOf(double value) => barLeft + (barRight - barLeft) * Math.Clamp(value, 0, maximum) / maximum;
+        var labels = ScaleLabels.Plan(measure, fonts.Small, AxisNumbers(measure, fonts.Small, scale, axis, language),
+            scale.Levels.Select(level => (WithNumber(level, language), axis.XOf(level.Value))), x, x + width);
+        var labelsTop = barTop + BarHeight + TickOverhang + 1;
 
-        var marker = ScaleMarker.Plan(measure, fonts.BodyBold, scale.ValueText, XOf(scale.Value), x, x + width);
-        var labelled = scale.Levels.Select(level => level with { Label = WithNumber(level, language) });
-        var ticks = ScaleTicks.Plan(measure, fonts.Small, labelled, XOf, x, x + width);
-        var barTop = marker.Height + 1;
-        var axisTop = (BarHeight - Typeset.LineHeight(fonts.Small)) / 2;
-
-        yield return new Block(barTop + BarHeight + TickOverhang + 1 + ticks.Height + 2, (g, top) =>
+        return new Block(labelsTop + labels.Height, (g, top) =>
         {
-            var bar = top + barTop;
-            DrawBands(g, scale.Levels, XOf, barLeft, barRight, bar);
-            Typeset.Left(g, zero, fonts.Small, Palette.Ink, x, bar + axisTop);
-            Typeset.Right(g, end, fonts.Small, Palette.Ink, x + width, bar + axisTop);
-            ticks.Draw(g, bar - TickOverhang, bar + BarHeight + TickOverhang, bar + BarHeight + TickOverhang + 1);
-            marker.Draw(g, top, bar, bar + BarHeight);
-        })
-        { SpaceBefore = 3 };
+            for (var i = 0; i < caption.Count; i++)
+                Typeset.Left(g, caption[i], captionFont, Palette.Ink, x, top + i * lineHeight);
+            var (bar, barBottom) = (top + barTop, top + barTop + BarHeight);
+            DrawBands(g, scale.Levels, axis, bar);
+            foreach (var level in scale.Levels)
+                g.DrawLine(Palette.Tick, axis.XOf(level.Value), bar, axis.XOf(level.Value), barBottom + TickOverhang);
+            axis.DrawBreak(g, bar, barBottom, TickOverhang);
+            marker.Draw(g, bar, barBottom);
+            labels.Draw(g, top + labelsTop);
+        });
+    }
+
+    /// <summary>"0" under the bar's start, the break's number under the break, the end with its unit under the end.</summary>
+    private static IEnumerable<(string Text, double Left)> AxisNumbers(TextMeasure measure, XFont font, LeadScale scale, ScaleAxis axis, LetterLanguage language)
+    {
+        yield return ("0", axis.Left);
+        if (axis.BreakAt is { } breakAt)
+        {
+            var number = ScaleNumber.Format(breakAt, language);
+            yield return (number, axis.BreakX + ScaleAxis.Gap / 2 - measure.Width(number, font) / 2);
+        }
+        var end = (ScaleNumber.Format(axis.Maximum, language) + " " + scale.Unit).Trim();
+        yield return (end, axis.Right - measure.Width(end, font));
     }
 
     /// <summary>"Action level 10": the level's number under its tick, unless its label already says it.</summary>
@@ -55,11 +63,16 @@ internal static class LeadScaleBlocks
         return level.Label.Contains(number, StringComparison.Ordinal) ? level.Label : $"{level.Label} {number}";
     }
 
-    private static void DrawBands(XGraphics g, IReadOnlyList<ScaleMark> levels, Func<double, double> xOf, double left, double right, double top)
+    /// <summary>Bands darken past each level; a broken axis leaves its gap white and outlines each part of the bar.</summary>
+    private static void DrawBands(XGraphics g, IReadOnlyList<ScaleMark> levels, ScaleAxis axis, double top)
     {
-        var edges = levels.Select(l => xOf(l.Value)).Where(e => e > left && e < right).Order().Prepend(left).Append(right).ToArray();
+        var edges = levels.Select(l => axis.XOf(l.Value)).Where(e => e > axis.Left && e < axis.Right).Order()
+            .Prepend(axis.Left).Append(axis.Right).ToArray();
         for (var i = 0; i < edges.Length - 1; i++)
             g.DrawRectangle(Palette.ScaleBands[Math.Min(i, Palette.ScaleBands.Length - 1)], edges[i], top, edges[i + 1] - edges[i], BarHeight);
-        g.DrawRectangle(Palette.Outline, left, top, right - left, BarHeight);
+        if (axis.BreakAt is not null)
+            g.DrawRectangle(XBrushes.White, axis.BreakX, top - 0.5, ScaleAxis.Gap, BarHeight + 1);
+        foreach (var (left, right) in axis.Segments())
+            g.DrawRectangle(Palette.Outline, left, top, right - left, BarHeight);
     }
 }

@@ -31,7 +31,7 @@ internal sealed class LetterHeader
         if (addressColumn == right)
             right.Gap(4);
         foreach (var line in content.Program.ContactLines)
-            right.Add(line, fonts.Small, Palette.Muted);
+            AddContact(right, left, line, page, fonts, measure);
 
         // Drawn before the date on its line, so text pulled from the PDF (screen readers, copy and paste) reads
         // the name and then the date, not the two run together.
@@ -42,6 +42,35 @@ internal sealed class LetterHeader
         right.Add(content.Date, fonts.Body, Palette.Ink);
         header.Bottom = Math.Max(Math.Max(left.Y, right.Y), page.Window.Bottom);
         return header;
+    }
+
+    /// <summary>
+    /// A contact line, right-aligned, using the room beside the left column's lines where they are short. A line that
+    /// still doesn't fit breaks after its label ("Correo electrónico:"), so a label is never split and an address is
+    /// cut only if it is wider than all the room there is.
+    /// </summary>
+    private static void AddContact(TextColumn right, TextColumn left, string line, PageGeometry page, LetterFonts fonts, TextMeasure measure)
+    {
+        double Room()
+        {
+            var (top, bottom) = (right.Y, right.Y + Typeset.LineHeight(fonts.Small));
+            // Beside the window the recipient's address is there, whatever the left column holds.
+            if (bottom > page.Window.Top)
+                return page.Right - (page.Window.Right + ColumnGap);
+            var start = left.Extents.Where(e => e.Top < bottom && e.Bottom > top).Select(e => e.Right + ColumnGap).DefaultIfEmpty(page.Left).Max();
+            return page.Right - Math.Min(start, page.Window.Right + ColumnGap);
+        }
+
+        if (measure.Width(line, fonts.Small) <= Room())
+        {
+            right.AddLine(line, fonts.Small, Palette.Muted);
+            return;
+        }
+        var colon = line.IndexOf(": ", StringComparison.Ordinal);
+        var parts = colon > 0 ? [line[..(colon + 1)], line[(colon + 2)..]] : new[] { line };
+        foreach (var part in parts)
+            foreach (var piece in measure.Wrap(part, fonts.Small, Room()))
+                right.AddLine(piece, fonts.Small, Palette.Muted);
     }
 
     public void Draw(XGraphics g)

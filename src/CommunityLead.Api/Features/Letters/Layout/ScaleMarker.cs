@@ -3,19 +3,28 @@ using PdfSharp.Drawing;
 namespace CommunityLead.Api.Features.Letters.Layout;
 
 /// <summary>
-/// The result on a scale: a triangle pointing down at the value and a stroke across the bar, with the value's
-/// text beside the triangle, on whichever side has room (wrapped if neither has).
+/// The result on a scale: a triangle pointing down at the value and a stroke across the bar, with the value's text
+/// beside the triangle, above the bar, on whichever side has room (wrapped if neither has). Ticks never reach above
+/// the bar, so nothing crosses the value.
 /// </summary>
-internal sealed class ScaleMarker(List<string> lines, XFont font, double x, bool textOnRight)
+internal sealed class ScaleMarker(List<string> lines, XFont font, double x, bool textOnRight, double textWidth)
 {
-    private const double HalfWidth = 5;
-    private const double TriangleHeight = 8;
-    private const double TextGap = 4;
+    private const double HalfWidth = 4.5;
+    private const double TriangleHeight = 7;
+    private const double TextGap = 3;
     private static readonly XPen Stroke = new(Palette.AccentColor, 2);
 
     private readonly double lineHeight = Typeset.LineHeight(font);
 
-    public double Height => Math.Max(lines.Count * lineHeight, TriangleHeight + 2);
+    public double Height => Math.Max(lines.Count * lineHeight, TriangleHeight) + 1;
+
+    /// <summary>True when the value is one line, so it can share a row with the scale's caption.</summary>
+    public bool OneLine => lines.Count == 1;
+
+    /// <summary>The horizontal extent of the triangle and the text together.</summary>
+    public (double Left, double Right) Extent => textOnRight
+        ? (x - HalfWidth, x + HalfWidth + TextGap + textWidth)
+        : (x - HalfWidth - TextGap - textWidth, x + HalfWidth);
 
     public static ScaleMarker Plan(TextMeasure measure, XFont font, string text, double x, double left, double right)
     {
@@ -24,10 +33,11 @@ internal sealed class ScaleMarker(List<string> lines, XFont font, double x, bool
         var width = measure.Width(text, font);
         var onRight = width <= roomRight || (width > roomLeft && roomRight >= roomLeft);
         var lines = measure.Wrap(text, font, Math.Max(onRight ? roomRight : roomLeft, 1));
-        return new ScaleMarker(lines, font, x, onRight);
+        return new ScaleMarker(lines, font, x, onRight, lines.Max(line => measure.Width(line, font)));
     }
 
-    public void Draw(XGraphics g, double top, double barTop, double barBottom)
+    /// <param name="barTop">The triangle's tip touches it; the text's last line sits beside the triangle, just above it.</param>
+    public void Draw(XGraphics g, double barTop, double barBottom)
     {
         var tip = barTop - 0.5;
         g.DrawPolygon(Palette.Accent,
@@ -35,8 +45,7 @@ internal sealed class ScaleMarker(List<string> lines, XFont font, double x, bool
             XFillMode.Winding);
         g.DrawLine(Stroke, x, barTop, x, barBottom);
 
-        // The text's last line sits level with the triangle, so the value reads as the triangle's label.
-        var textTop = top + Height - lines.Count * lineHeight;
+        var textTop = barTop - 1 - lines.Count * lineHeight;
         for (var i = 0; i < lines.Count; i++)
         {
             var lineTop = textTop + i * lineHeight;

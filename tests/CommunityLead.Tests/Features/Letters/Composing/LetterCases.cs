@@ -11,9 +11,12 @@ namespace CommunityLead.Tests.Features.Letters.Composing;
 
 /// <summary>One letter to compose: the kit's facts and how the letter is addressed.</summary>
 internal sealed record LetterCase(string Name, KitFacts Kit, RuleProfile Profile, LetterLanguage Language = LetterLanguage.En,
-    LetterKind? Kind = null, LetterRecipient? To = null, string KitCode = LetterCases.Code, LetterSettings? Sender = null)
+    LetterKind? Kind = null, LetterRecipient? To = null, string KitCode = LetterCases.Code, LetterSettings? Sender = null,
+    ProgramRules? Program = null)
 {
-    public KitOutcome Interpretation => Interpreter.Interpret(Kit, Profile, LetterCases.DefaultProgram);
+    private ProgramRules Rules => Program ?? LetterCases.DefaultProgram;
+
+    public KitOutcome Interpretation => Interpreter.Interpret(Kit, Profile, Rules);
 
     public LetterContent Compose() => Compose(Language);
 
@@ -23,7 +26,7 @@ internal sealed record LetterCase(string Name, KitFacts Kit, RuleProfile Profile
         var kind = Kind ?? (outcome.Band == Band.Retest ? LetterKind.Retest : LetterKind.Results);
         return LetterComposer.Compose(outcome, Profile.Name, To ?? LetterCases.Ana, language, kind, KitCode, Kit.CollectedOn,
             LetterCases.LetterDate, Kit.Household.WaterSource == WaterSource.PrivateWell, Kit.Household.ChildUnder6 || Kit.Household.Pregnant,
-            Sender ?? LetterCases.Settings, LetterLevels.For(Profile, LetterCases.DefaultProgram, Kit.CollectedOn));
+            Sender ?? LetterCases.Settings, LetterLevels.For(Profile, Rules, Kit.CollectedOn));
     }
 }
 
@@ -38,7 +41,8 @@ internal static class LetterCases
     public static readonly LetterSettings Settings = new("Brindle Cove Tap Check",
         ["Brindle Cove Health Collaborative", "12 Lantern Street", "Brindle Cove, Tallow County 00001"],
         "+1 555 0100", "tapcheck@example.org", "tapcheck.example.org",
-        "Tallow County Health Department", "+1 555 0140", "Brindle Cove Water Works", "+1 555 0150");
+        "Tallow County Health Department", "+1 555 0140", "Brindle Cove Water Works", "+1 555 0150",
+        StaffName: "Dana Whitfield", StaffTitle: "Program Coordinator", StaffTitleEs: "Coordinación del programa");
 
     /// <summary>Long official names and full US phone numbers: the hardest contact lines to keep readable.</summary>
     public static readonly LetterSettings LongNames = Settings with
@@ -46,6 +50,8 @@ internal static class LetterCases
         ProgramPhone = "(217) 555-0100",
         HealthDepartmentName = "Tallow County Department of Public Health", HealthDepartmentPhone = "(217) 555-0140",
         WaterUtilityName = "City of Brindle Cove Department of Water Management", WaterUtilityPhone = "(217) 555-0150",
+        ProgramEmail = "tapcheck-questions@brindlecove-health.example.org",
+        StaffName = "Dana Whitfield-Okonkwo", StaffTitle = "Community Lead Testing Program Coordinator", StaffTitleEs = null,
     };
 
     public static readonly LetterRecipient Ana = new("Ana Quill", "41 Heron Lane", "Apt 2", "Brindle Cove", "TC", "00002");
@@ -117,6 +123,18 @@ internal static class LetterCases
     public static readonly LetterCase SoilDripLine = new("soil, drip line 940", new KitFacts(KitKind.Soil, Collected, Home(),
         [Soil(SoilLocation.DripLine, 940, 0), Soil(SoilLocation.PlayArea, 150, 10)], []), Profiles.SoilHazardAndScreening);
 
+    // The scale cases: a result far past every level, a soil result just under the hazard standard, and a
+    // sequential profile of five bottles.
+    public static readonly LetterCase VeryHigh = new("very high", Water(Home(child: true),
+        [Lead(BottleType.FirstDraw, 2000), Lead(BottleType.Flushed, 9)]), Profiles.UsLcri);
+
+    public static readonly LetterCase SoilNearLevel = new("soil near its level", new KitFacts(KitKind.Soil, Collected, Home(child: true),
+        [Soil(SoilLocation.DripLine, 940, 40), Soil(SoilLocation.PlayArea, 120, 10)], []), Profiles.SoilHazard);
+
+    public static readonly LetterCase SequentialFive = new("sequential, five bottles", new KitFacts(KitKind.WaterSequential, Collected, Home(),
+        [Lead(BottleType.Sequential, 3.0, 1), Lead(BottleType.Sequential, 4.5, 2), Lead(BottleType.Sequential, 16.0, 3),
+            Lead(BottleType.Sequential, 7.5, 4), Lead(BottleType.Sequential, 2.2, 5)], []), Profiles.UsLcri);
+
     public static readonly LetterCase[] English = [Low, ActionWithChild, ServiceLine, Retest, Corrected, SoilUncertain, PrivateWell, Sequential,
-        NotDetected, ActionFaucet, Urgent, CopperOnly, RetestHigh, SoilDripLine];
+        NotDetected, ActionFaucet, Urgent, CopperOnly, RetestHigh, SoilDripLine, VeryHigh, SoilNearLevel, SequentialFive];
 }

@@ -67,15 +67,18 @@ public class LetterResultsTests
     }
 
     [Fact]
-    public void Compose_SequentialNearUrgent_ScaleShowsTheUrgentLevelOnlyThere()
+    public void Compose_SequentialNearUrgent_EveryBarShowsTheUrgentLevelOnOneAxis()
     {
         var scales = Sequential.Compose().Scales;
 
         Assert.Equal(["Sequential bottle 1", "Sequential bottle 2", "Sequential bottle 3"], scales.Select(s => s.Label));
-        Assert.DoesNotContain(scales[0].Levels, l => l.Label == "Urgent level");
-        // 40 µg/L is near the program's 50 µg/L urgent level: shown, and the scale runs past it (1.5 × 50 → 80).
-        Assert.Equal([new ScaleMark(10, "Action level"), new ScaleMark(50, "Urgent level")], scales[2].Levels);
-        Assert.Equal(80, scales[2].Maximum);
+        // 40 µg/L is near the program's 50 µg/L urgent level: shown on every bar, so the bars read alike, and the
+        // one axis runs past it (1.5 × 50 → 80), drawn to size (50 is well past the first quarter of 80).
+        Assert.All(scales, s =>
+        {
+            Assert.Equal([new ScaleMark(10, "Action level"), new ScaleMark(50, "Urgent level")], s.Levels);
+            Assert.Equal((80.0, (double?)null), (s.Maximum, s.BreakAt));
+        });
     }
 
     [Fact]
@@ -93,7 +96,8 @@ public class LetterResultsTests
         ], letter.Results!.Rows);
         Assert.Contains("US federal soil-lead hazard standards", letter.Results.Note);
         Assert.Equal([400.0, 1200, 1200], letter.Scales.Select(s => s.Levels.Single().Value));
-        Assert.Equal([600.0, 2000, 2000], letter.Scales.Select(s => s.Maximum));
+        // One soil axis for the letter, to 1.5 × 1,200 → 2,000, so 380 in the play area never looks larger than 150 in the garden.
+        Assert.Equal([2000.0, 2000, 2000], letter.Scales.Select(s => s.Maximum));
         Assert.Contains(letter.Meaning.Paragraphs, p => p.Contains("give or take 60 mg/kg"));
     }
 

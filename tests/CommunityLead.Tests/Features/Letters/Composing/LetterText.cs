@@ -7,9 +7,13 @@ internal static class LetterText
 {
     public static IEnumerable<LetterSection> Sections(LetterContent c) => [c.Meaning, c.Steps, c.Cautions, c.WhoToCall];
 
-    /// <summary>Every sentence-bearing paragraph: the sections, the table note and the closing (no headings, labels or cells).</summary>
+    /// <summary>Every sentence-bearing paragraph: the sections, the table note, the scales' note and the closing (no headings, labels or cells).</summary>
     public static IEnumerable<string> Paragraphs(LetterContent c) =>
-        Sections(c).SelectMany(s => s.Paragraphs).Concat(c.Results is { } t ? [t.Note] : []).Append(c.Closing);
+        Sections(c).SelectMany(s => s.Paragraphs).Concat(c.Results is { } t ? [t.Note] : []).Concat(c.ScaleNote is { } n ? [n] : []).Append(c.Closing);
+
+    /// <summary>The greeting and the signature's lines.</summary>
+    public static IEnumerable<string> Personal(LetterContent c) =>
+        new[] { c.Greeting, c.Signature?.SignOff, c.Signature?.Name, c.Signature?.Title }.OfType<string>();
 
     /// <summary>Headings and labels: the title, section headings, table headers and kit-fact labels.</summary>
     public static IEnumerable<string> Headings(LetterContent c) =>
@@ -21,7 +25,8 @@ internal static class LetterText
             .Concat(c.KitFacts.SelectMany(f => new[] { f.Label, f.Value }))
             .Concat(c.Results is { } t ? t.Headers.Concat(t.Rows.SelectMany(r => r)).Append(t.Note) : [])
             .Concat(c.Scales.SelectMany(s => s.Levels.Select(l => l.Label).Append(s.Label).Append(s.ValueText)))
-            .Concat(Sections(c).SelectMany(s => s.Paragraphs.Prepend(s.Heading)));
+            .Concat(Sections(c).SelectMany(s => s.Paragraphs.Prepend(s.Heading)))
+            .Concat(c.ScaleNote is { } note ? [note] : []).Concat(Personal(c));
 
     public static string Joined(LetterContent c) => string.Join("\n", All(c));
 }

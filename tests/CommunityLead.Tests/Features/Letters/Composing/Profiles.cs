@@ -20,6 +20,12 @@ internal static class Profiles
         Level(Analyte.Copper, Matrix.Water, LevelKind.Aesthetic, 1.0, Units.MilligramsPerLiter, "40 CFR 143.3"),
     ]);
 
+    // Lead 15 µg/L action level of the Lead and Copper Rule, until the LCRI compliance date: 40 CFR 141.80(c).
+    public static readonly RuleProfile UsLcr = new("us-lcr", 1, "US federal, Lead and Copper Rule", "US",
+    [
+        Level(Analyte.Lead, Matrix.Water, LevelKind.ActionLevel, 15, Units.MicrogramsPerLiter, "40 CFR 141.80(c)"),
+    ]);
+
     // Schools: 1 ppb recommended maximum (American Academy of Pediatrics, "Prevention of Childhood Lead Toxicity",
     // 2016) as an advisory over the LCRI 10 µg/L action level (89 FR 86418).
     public static readonly RuleProfile Schools = new("schools-child-care", 1, "Schools and child care (AAP advisory on US federal levels)", "US",

@@ -1,5 +1,7 @@
 using CommunityLead.Api.Features.Letters;
+using System.Text.Json;
 using CommunityLead.Api.Features.Letters.Layout;
+using CommunityLead.Api.Infrastructure;
 
 namespace CommunityLead.Tests.Features.Letters.Layout;
 
@@ -49,6 +51,28 @@ public class LetterReproducibilityTests
         // Midnight UTC of the letter's date, "14 de abril de 2026": never the clock.
         Assert.Equal("D:20260414000000+00'00'", letter.Information.CreationDate);
         Assert.Equal("D:20260414000000+00'00'", letter.Information.ModifiedDate);
+    }
+
+    [Fact]
+    public void Render_ContentStoredBeforeGreetingsAndBrokenAxes_ReadsAndRendersWithoutThem()
+    {
+        // A letter recorded before these fields existed has none of them in its stored JSON; it must still render.
+        var options = new JsonSerializerOptions();
+        JsonSetup.Configure(options);
+        var json = JsonSerializer.SerializeToNode(LetterSamples.EnglishActionLevel(), options)!.AsObject();
+        foreach (var name in new[] { "greeting", "signature", "scaleNote" })
+            Assert.True(json.Remove(name), name);
+        foreach (var scale in json["scales"]!.AsArray())
+            Assert.True(scale!.AsObject().Remove("breakAt"));
+
+        var stored = json.Deserialize<LetterContent>(options)!;
+        var letter = RenderedLetter.Of(stored);
+
+        Assert.Null(stored.Greeting);
+        Assert.Null(stored.Signature);
+        Assert.All(stored.Scales, s => Assert.Null(s.BreakAt));
+        Assert.DoesNotContain("Dear Maria Lopez", letter.Text);
+        Assert.Contains("not medical advice", letter.Text);
     }
 
     static string FileId(byte[] pdf)

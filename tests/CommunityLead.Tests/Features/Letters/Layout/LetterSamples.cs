@@ -58,7 +58,9 @@ public static class LetterSamples
             "Your child's doctor or clinic, about a blood lead test.",
         ]),
         "This letter is not medical advice. For health questions, please follow your local health department and talk with a doctor or other licensed professional. Thank you for taking part.",
-        "Riverbend Community Lead Testing Program · Kit code K7QM-4T2X");
+        "Riverbend Community Lead Testing Program · Kit code K7QM-4T2X",
+        Greeting: "Dear Maria Lopez,",
+        Signature: new("Sincerely,", "Dana Whitfield", "Program Coordinator"));
 
     /// <summary>Nothing found: a short letter that fits on one page.</summary>
     public static LetterContent EnglishNotDetected(PaperSize paper = PaperSize.Letter) => new(
@@ -77,7 +79,9 @@ public static class LetterSamples
         new LetterSection("Keep in mind", []),
         new LetterSection("Who to call", ["Riverbend County Health Department: (555) 010-2200."]),
         "This letter is not medical advice. For health questions, please follow your local health department and talk with a doctor or other licensed professional.",
-        "Riverbend Community Lead Testing Program · Kit code K7QM-4T2X");
+        "Riverbend Community Lead Testing Program · Kit code K7QM-4T2X",
+        Greeting: "Dear Maria Lopez,",
+        Signature: new("Sincerely,", "Dana Whitfield", "Program Coordinator"));
 
     /// <summary>A Spanish letter on A4: accents, ñ, ¿, µg/L, ≤ and dashes must all come through.</summary>
     public static LetterContent Spanish(PaperSize paper = PaperSize.A4) => new(
@@ -111,5 +115,7 @@ public static class LetterSamples
         new LetterSection("A quién llamar",
             ["Departamento de Salud del Condado de Riverbend, Salud Ambiental: (555) 010-2200.", "Compañía de agua de Riverbend, atención al cliente: (555) 010-3100."]),
         "Esta carta no es un consejo médico. Para sus preguntas de salud, siga las indicaciones del departamento de salud local y hable con un médico u otro profesional con licencia. ¡Gracias por participar!",
-        "Programa Comunitario de Análisis de Plomo · Código del kit K7QM-4T2X");
+        "Programa Comunitario de Análisis de Plomo · Código del kit K7QM-4T2X",
+        Greeting: "Hola, José Ángel Muñoz Peña:",
+        Signature: new("Atentamente,", "Dana Whitfield", "Coordinación del programa"));
 }

@@ -1,9 +1,17 @@
 using CommunityLead.Api.Features.Letters;
 using UglyToad.PdfPig;
 using UglyToad.PdfPig.Content;
+using UglyToad.PdfPig.Core;
 using UglyToad.PdfPig.DocumentLayoutAnalysis.TextExtractor;
 
 namespace CommunityLead.Tests.Features.Letters.Layout;
+
+/// <summary>A straight line drawn on a page, in PDF coordinates (origin bottom-left, points).</summary>
+public readonly record struct Segment(PdfPoint From, PdfPoint To, double Width = 0)
+{
+    public bool IsVertical => Math.Abs(From.X - To.X) < 0.01;
+    public bool IsHorizontal => Math.Abs(From.Y - To.Y) < 0.01;
+}
 
 /// <summary>A rendered letter read back with PdfPig: what a reader would see, page by page.</summary>
 public sealed class RenderedLetter
@@ -13,6 +21,12 @@ public sealed class RenderedLetter
     public required IReadOnlyList<IReadOnlyList<Word>> PageWords { get; init; }
     public required IReadOnlyList<(double Width, double Height)> PageSizes { get; init; }
     public required DocumentInformation Information { get; init; }
+
+    /// <summary>Every stroked straight segment on each page (ticks, rules, the marker's stroke, a break's "//").</summary>
+    public required IReadOnlyList<IReadOnlyList<Segment>> PageLines { get; init; }
+
+    /// <summary>The bounding box of every filled shape on each page (the scales' bands, the marker's triangle).</summary>
+    public required IReadOnlyList<IReadOnlyList<PdfRectangle>> PageFills { get; init; }
 
     public string Text => string.Join("\n", PageTexts);
 
@@ -32,8 +46,38 @@ public sealed class RenderedLetter
             PageWords = pages.Select(page => (IReadOnlyList<Word>)page.GetWords().ToList()).ToList(),
             PageSizes = pages.Select(page => (page.Width, page.Height)).ToList(),
             Information = document.Information,
+            PageLines = pages.Select(page => (IReadOnlyList<Segment>)page.Paths.Where(path => path.IsStroked)
+                .SelectMany(path => path.SelectMany(Segments).Select(s => s with { Width = Convert.ToDouble(path.LineWidth) })).ToList()).ToList(),
+            PageFills = pages.Select(page => (IReadOnlyList<PdfRectangle>)page.Paths.Where(path => path.IsFilled)
+                .Select(path => path.GetBoundingRectangle()).OfType<PdfRectangle>().ToList()).ToList(),
         };
     }
+
+    /// <summary>A subpath's straight pieces, rectangles' sides included.</summary>
+    static IEnumerable<Segment> Segments(PdfSubpath subpath)
+    {
+        PdfPoint? at = null, start = null;
+        foreach (var command in subpath.Commands)
+            switch (command)
+            {
+                case PdfSubpath.Move move:
+                    (at, start) = (move.Location, move.Location);
+                    break;
+                case PdfSubpath.Line line:
+                    yield return new Segment(line.From, line.To);
+                    at = line.To;
+                    break;
+                case PdfSubpath.Close when at is { } from && start is { } to:
+                    yield return new Segment(from, to);
+                    at = to;
+                    break;
+            }
+    }
+
+    /// <summary>The words of one page as text lines (words sharing a baseline), top to bottom.</summary>
+    public IReadOnlyList<(double Baseline, string Text, IReadOnlyList<Word> Words)> Lines(int page) =>
+        [.. PageWords[page].GroupBy(w => Math.Round(w.Letters[0].StartBaseLine.Y, 1)).OrderByDescending(g => g.Key)
+            .Select(g => (g.Key, string.Join(' ', g.OrderBy(w => w.BoundingBox.Left).Select(w => w.Text)), (IReadOnlyList<Word>)[.. g.OrderBy(w => w.BoundingBox.Left)]))];
 
     /// <summary>
     /// True when the text's words appear in this order in the letter. Gaps are allowed (a paragraph may continue
@@ -65,6 +109,8 @@ public sealed class RenderedLetter
             yield return line;
         yield return content.Date;
         yield return content.Title;
+        if (content.Greeting is { } greeting)
+            yield return greeting;
         foreach (var fact in content.KitFacts)
         {
             yield return fact.Label;
@@ -90,7 +136,16 @@ public sealed class RenderedLetter
             foreach (var paragraph in section.Paragraphs)
                 yield return paragraph;
         }
+        if (content.ScaleNote is { } note)
+            yield return note;
         yield return content.Closing;
+        if (content.Signature is { } signature)
+        {
+            yield return signature.SignOff;
+            yield return signature.Name;
+            if (signature.Title is { } title)
+                yield return title;
+        }
         yield return content.Footer;
     }
 }
