@@ -7,6 +7,7 @@ using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
+using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Features.Reports;
 using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
@@ -50,6 +51,7 @@ app.UseAuthorization();
 app.UseRateLimiter();
 
 app.MapHealth();
+app.MapOperations();
 app.MapHouseholds();
 app.MapKits();
 app.MapLabResults();

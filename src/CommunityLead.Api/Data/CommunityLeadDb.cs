@@ -53,14 +53,26 @@ public class CommunityLeadDb : DbContext
 
     private void BeforeSave()
     {
-        // Every kit's report period follows its dates, whichever feature changed them.
-        foreach (var kit in ChangeTracker.Entries<Kit>().Where(e => e.State is EntityState.Added or EntityState.Modified))
+        // Each Entries() call would scan every tracked entity for changes again (a 10,000-row batch tracks 20,000
+        // and more): scan once here, and let the save scan once more after PeriodMonth is set.
+        ChangeTracker.DetectChanges();
+        var autoDetect = ChangeTracker.AutoDetectChangesEnabled;
+        ChangeTracker.AutoDetectChangesEnabled = false;
+        try
         {
-            var date = kit.Entity.CollectedAtUtc ?? kit.Entity.IssuedAtUtc;
-            kit.Entity.PeriodMonth = date.Year * 100 + date.Month;
+            // Every kit's report period follows its dates, whichever feature changed them.
+            foreach (var kit in ChangeTracker.Entries<Kit>().Where(e => e.State is EntityState.Added or EntityState.Modified))
+            {
+                var date = kit.Entity.CollectedAtUtc ?? kit.Entity.IssuedAtUtc;
+                kit.Entity.PeriodMonth = date.Year * 100 + date.Month;
+            }
+            // The triggers in the database are the real guard; this fails earlier with a clearer message.
+            if (ChangeTracker.Entries<AuditEntry>().Any(e => e.State is EntityState.Modified or EntityState.Deleted))
+                throw new InvalidOperationException("The audit trail is append-only.");
         }
-        // The triggers in the database are the real guard; this fails earlier with a clearer message.
-        if (ChangeTracker.Entries<AuditEntry>().Any(e => e.State is EntityState.Modified or EntityState.Deleted))
-            throw new InvalidOperationException("The audit trail is append-only.");
+        finally
+        {
+            ChangeTracker.AutoDetectChangesEnabled = autoDetect;
+        }
     }
 }

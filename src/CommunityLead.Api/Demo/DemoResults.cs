@@ -29,6 +29,7 @@ public static class DemoResults
         var db = services.GetRequiredService<CommunityLeadDb>();
         var json = services.GetRequiredService<IOptions<JsonOptions>>().Value.SerializerOptions;
         var clock = services.GetRequiredService<TimeProvider>();
+        var calendar = services.GetRequiredService<ProgramCalendar>();
         var options = services.GetRequiredService<IOptions<LabIntakeOptions>>().Value;
         var interpreting = services.GetRequiredService<InterpretWithResults>();
         var repair = services.GetRequiredService<InterpretationRepair>();
@@ -65,7 +66,7 @@ public static class DemoResults
         foreach (var letter in letters)
         {
             var kit = ready.Single(k => k.Id == letter.Record.KitId);
-            await LetterHandlers.ConfirmAsync(db, kit, letter.Record, Coordinator, SentAt(kit), CancellationToken.None);
+            await LetterHandlers.ConfirmAsync(db, kit, letter.Record, Coordinator, SentAt(kit), calendar, CancellationToken.None);
         }
         await db.SaveChangesAsync();
         return true;

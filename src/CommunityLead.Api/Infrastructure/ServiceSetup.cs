@@ -2,6 +2,7 @@ using CommunityLead.Api.Auth;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Letters.Layout;
+using CommunityLead.Api.Features.Operations;
 using FluentValidation;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Http.Json;
@@ -27,6 +28,8 @@ public static class ServiceSetup
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
         // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
         services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);
+        // Ours first: the framework's writer leaves a client that accepts */* (curl) with a bare status.
+        services.AddSingleton<IProblemDetailsWriter, AnyClientProblemWriter>();
         services.AddProblemDetails();
         services.AddExceptionHandler<BadRequestExceptionHandler>();
         services.AddValidatorsFromAssemblyContaining<Program>(ServiceLifetime.Singleton);
@@ -35,6 +38,8 @@ public static class ServiceSetup
         services.AddSingleton<SignInThrottle>();
         services.AddCommunityLeadRateLimits();
         services.AddCommunityLeadForwarding();
+        services.AddCommunityLeadHealthChecks();
+        services.AddCommunityLeadTelemetry(builder.Configuration);
         services.AddAuthentication(ApiKeyAuthenticationHandler.SchemeName)
             .AddScheme<AuthenticationSchemeOptions, ApiKeyAuthenticationHandler>(ApiKeyAuthenticationHandler.SchemeName, null);
         services.AddAuthorization(Policies.Add);

@@ -66,6 +66,10 @@ public static class SettingsChecks
             foreach (var (network, i) in s.KnownNetworks.Select((x, i) => (x, i)))
                 p.Check(IPNetwork.TryParse(network, out _), $"KnownNetworks:{i}", "must be a network in CIDR form (like 10.0.0.0/24)", network);
         });
+        Add<ProgramOptions>(services, configuration, "Program", (s, p) =>
+            p.Check(TimeZoneInfo.TryFindSystemTimeZoneById(s.TimeZone ?? "", out _), nameof(s.TimeZone),
+                "must be an IANA time zone id (like America/Chicago)", s.TimeZone));
+        services.AddSingleton<ProgramCalendar>();
         Add<SwaggerOptions>(services, configuration, SwaggerOptions.Section, (_, _) => { });
         Add<DatabaseOptions>(services, configuration, "Database", (_, _) => { });
         services.AddSingleton(_ => ReadLetters(configuration));

@@ -32,11 +32,13 @@ public static class StorageSetup
             if (string.IsNullOrWhiteSpace(connectionString))
                 throw new SettingsException("Database:Provider is Postgres, so ConnectionStrings:CommunityLead must name the server.");
             // Handlers ask for CommunityLeadDb and get the PostgreSQL-mapped model with its own migrations.
-            services.AddDbContext<CommunityLeadDb, PostgresCommunityLeadDb>(o => o.UseNpgsql(connectionString));
+            services.AddDbContext<CommunityLeadDb, PostgresCommunityLeadDb>(o => o.UseNpgsql(connectionString,
+                npgsql => npgsql.UseParameterizedCollectionMode(ParameterTranslationMode.Parameter)));
             return;
         }
         services.AddDbContext<CommunityLeadDb>(o => o
-            .UseSqlite(connectionString ?? DefaultConnectionString)
+            .UseSqlite(connectionString ?? DefaultConnectionString,
+                sqlite => sqlite.UseParameterizedCollectionMode(ParameterTranslationMode.Parameter))
             .AddInterceptors(new SqlitePragmas()));
     }
 

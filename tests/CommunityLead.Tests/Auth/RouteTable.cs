@@ -18,6 +18,8 @@ public static class RouteTable
     public static readonly IReadOnlyDictionary<string, RouteExpectation> Expectations = new Dictionary<string, RouteExpectation>
     {
         ["GET /health"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health")),
+        ["* /health/live"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health/live")),
+        ["* /health/ready"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health/ready")),
 
         ["GET /api/households/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/households?search=Quennell")),
         ["POST /api/households/"] = Coordinator(HttpStatusCode.Created, _ => Send(HttpMethod.Post, "/api/households", Household())),
@@ -79,6 +81,7 @@ public static class RouteTable
         ["GET /api/reports/summary"] = Allow([Roles.Health], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/reports/summary?groupBy=area")),
 
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
+        ["* /api/admin/metrics"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/metrics")),
         ["GET /api/admin/audit"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/audit?pageSize=10")),
         ["GET /api/admin/messages"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/messages?format=csv")),
     };

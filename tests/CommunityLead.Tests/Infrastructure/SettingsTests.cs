@@ -27,6 +27,7 @@ public class SettingsTests
     [InlineData("ForwardedHeaders:KnownNetworks:0", "10.0.0.0/33")]
     [InlineData("Swagger:Enabled", "yes please")]
     [InlineData("Database:MigrateOnStartup", "maybe")]
+    [InlineData("Program:TimeZone", "Mars/Olympus_Mons")]
     [InlineData("Letters:Paper", "B5")]
     [InlineData("Letters:ProgramPhone", "")]
     public void Settings_BadValue_RefusedNamingTheSetting(string name, string value)

@@ -1,8 +1,10 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
+using CommunityLead.Api.Features.Operations;
 using Microsoft.AspNetCore.Http.Json;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.Options;
+using KitOutcome = CommunityLead.Rules.Interpretation.Interpretation;
 
 namespace CommunityLead.Api.Features.Interpretation;
 
@@ -25,14 +27,16 @@ public sealed class InterpretWithResults(CommunityLeadDb db, ProfileCatalog cata
         var uncancellable = CancellationToken.None;
         await using var transaction = await db.Database.BeginTransactionAsync(uncancellable);
         await db.SaveChangesAsync(uncancellable);
+        IReadOnlyDictionary<int, KitOutcome> outcomes = new Dictionary<int, KitOutcome>();
         if (completedKits.Count > 0)
         {
             // The results just written are read back inside this transaction. Clearing first spares the second
             // save from checking every row of a 10,000-row batch for changes again.
             db.ChangeTracker.Clear();
-            await KitInterpreting.InterpretAsync(db, catalog, completedKits, actor, nowUtc, json.Value.SerializerOptions, uncancellable);
+            outcomes = await KitInterpreting.InterpretAsync(db, catalog, completedKits, actor, nowUtc, json.Value.SerializerOptions, uncancellable);
             await db.SaveChangesAsync(uncancellable);
         }
         await transaction.CommitAsync(uncancellable);
+        ServiceMetrics.Interpreted(outcomes.Values.Select(o => o.Band));
     }
 }

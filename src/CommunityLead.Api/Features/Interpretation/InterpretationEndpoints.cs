@@ -1,6 +1,7 @@
 using System.Text.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
+using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Kits;
@@ -60,6 +61,7 @@ public static class InterpretationEndpoints
         var now = clock.GetUtcNow().UtcDateTime;
         var outcome = (await KitInterpreting.InterpretAsync(db, catalog, [kit.Id], Actor.From(http.User), now, json.Value.SerializerOptions, ct))[kit.Id];
         if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
+        ServiceMetrics.Interpreted([outcome.Band]);
         var profile = catalog.For(kit.Kind);
         return TypedResults.Ok(Response(kit.Code, outcome, new ProfileRef(profile.Id, profile.Version), now, provisional: false));
     }

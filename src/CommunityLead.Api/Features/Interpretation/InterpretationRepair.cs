@@ -1,5 +1,6 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
+using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Infrastructure;
 using Microsoft.AspNetCore.Http.Json;
 using Microsoft.EntityFrameworkCore;
@@ -71,6 +72,7 @@ public sealed class InterpretationRepair(CommunityLeadDb db, ProfileCatalog cata
             log.LogInformation("Another instance changed some of {Count} kits while they were being repaired; they are read again.", unchanged.Count);
             return null;
         }
+        ServiceMetrics.Interpreted(outcomes.Values.Select(o => o.Band));
         var codes = new List<string>();
         foreach (var (id, outcome) in outcomes.OrderBy(o => o.Key))
         {

@@ -4,6 +4,7 @@ using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Features.Interpretation;
+using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.LabResults;
 using Microsoft.AspNetCore.Http.Features;
@@ -55,7 +56,13 @@ public static class BatchIntake
             throw new BadHttpRequestException("The batch is not valid JSON.", StatusCodes.Status400BadRequest, e);
         }
 
-        return await IngestAsync(parsed, db, options, jsonOptions, clock, interpreting, repair, Actor.From(http.User), ct);
+        var outcome = await IngestAsync(parsed, db, options, jsonOptions, clock, interpreting, repair, Actor.From(http.User), ct);
+        switch (outcome.Result)
+        {
+            case Created<BatchOutcome> { Value: { } stored }: ServiceMetrics.BatchStored(stored.Status, stored.ResultCount); break;
+            case ProblemHttpResult { StatusCode: StatusCodes.Status422UnprocessableEntity }: ServiceMetrics.BatchRefused(); break;
+        }
+        return outcome;
     }
 
     /// <summary>

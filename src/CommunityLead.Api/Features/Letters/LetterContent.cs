@@ -75,7 +75,10 @@ public sealed record LetterSection(string Heading, IReadOnlyList<string> Paragra
 public interface ILetterLayout
 {
     /// <summary>The same content gives the same bytes, so a sent letter can be re-rendered and checked by hash.</summary>
-    byte[] Render(LetterContent content);
+    byte[] Render(LetterContent content) => Render(content, out _);
+
+    /// <summary>As <see cref="Render(LetterContent)"/>, with the page count the layout dealt, so nobody parses the PDF again to learn it.</summary>
+    byte[] Render(LetterContent content, out int pages);
 
     string ContentType { get; }
 }

@@ -47,7 +47,8 @@ public static class LetterHandlers
 
     /// <summary>Nothing is marked sent without this confirmation; it also records how long the household waited.</summary>
     public static async Task<Results<Ok<LetterListing>, ValidationProblem, ProblemHttpResult>> MarkSent(
-        string code, LetterSentRequest? request, CommunityLeadDb db, TimeProvider clock, HttpContext http, CancellationToken ct)
+        string code, LetterSentRequest? request, CommunityLeadDb db, TimeProvider clock, ProgramCalendar calendar, HttpContext http,
+        CancellationToken ct)
     {
         var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
         if (invalid is not null) return invalid;
@@ -71,7 +72,7 @@ public static class LetterHandlers
         // A letter recorded before the gate existed, released since: it carries who released it.
         if (release.Needed && letter.ReleasedBy is null)
             (letter.ReleasedBy, letter.ReleasedAtUtc) = (release.ReleasedBy, release.ReleasedAtUtc);
-        if (await ConfirmAsync(db, kit, letter, Actor.From(http.User), clock.GetUtcNow().UtcDateTime, ct) is { } illegal)
+        if (await ConfirmAsync(db, kit, letter, Actor.From(http.User), clock.GetUtcNow().UtcDateTime, calendar, ct) is { } illegal)
             return illegal;
         if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
         return TypedResults.Ok(Listing(letter));
@@ -79,14 +80,15 @@ public static class LetterHandlers
 
     /// <summary>Marks one issued letter sent: the kit moves to letter-sent, the wait is recorded, a corrected-result item closes.</summary>
     internal static async Task<ProblemHttpResult?> ConfirmAsync(CommunityLeadDb db, Kit kit, IssuedLetter letter, Actor actor, DateTime now,
-        CancellationToken ct)
+        ProgramCalendar calendar, CancellationToken ct)
     {
         if (KitTransitions.Apply(db, kit, KitAction.SendLetter, actor, now,
                 detail: $"letter {letter.Id} ({KebabEnum.Name(letter.Kind)}, {KebabEnum.Name(letter.Language)}), sha256 {letter.Sha256[..12]}") is { } illegal)
             return illegal;
         letter.SentAtUtc = now;
         letter.SentBy = actor.Label;
-        letter.DaysFromCollection = DateOnly.FromDateTime(now).DayNumber - letter.CollectedOn.DayNumber;
+        // Both the household's local date: CollectedOn is the date the household wrote, the sending date the program's.
+        letter.DaysFromCollection = calendar.DateOf(now).DayNumber - letter.CollectedOn.DayNumber;
         await db.Attention.Where(a => a.KitId == kit.Id && a.ResolvedAtUtc == null && a.Reason == AttentionFlag.CorrectedAfterLetter)
             .ForEachAsync(a => { a.ResolvedAtUtc = now; a.ResolvedBy = actor.Label; a.ResolutionNote = $"Corrected letter {letter.Id} sent."; }, ct);
         return null;

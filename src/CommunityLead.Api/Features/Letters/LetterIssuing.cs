@@ -4,9 +4,11 @@ using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Features.Interpretation;
+using CommunityLead.Api.Infrastructure;
 using CommunityLead.Api.Features.Letters.Composing;
 using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Features.Letters.Layout;
+using CommunityLead.Api.Features.Operations;
 using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using Microsoft.AspNetCore.Http.Json;
@@ -24,7 +26,7 @@ public sealed record RenderedLetter(IssuedLetter Record, byte[] Pdf);
 /// Works on many kits at once for a mailing.
 /// </summary>
 public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, ILetterLayout layout, LetterSettings settings,
-    IOptions<JsonOptions> json, TimeProvider clock)
+    IOptions<JsonOptions> json, TimeProvider clock, ProgramCalendar calendar)
 {
     private JsonSerializerOptions Json => json.Value.SerializerOptions;
 
@@ -53,37 +55,61 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
 
     private async Task<List<RenderedLetter>> IssueOnceAsync(IReadOnlyCollection<int> kitIds, LetterLanguage? language, Actor actor, CancellationToken ct)
     {
-        var drafts = await DraftAsync(kitIds, language, ct);
         var releases = await LetterRelease.ForAsync(db, kitIds, ct);
+        // A letter still held back is not issued: nothing is recorded that could be confirmed as sent.
+        var drafts = (await DraftAsync(kitIds, language, ct)).Where(d => releases.Of(d.KitId).Released).ToList();
+        var files = RenderAll(drafts, ct);
+        var draftKits = drafts.Select(d => d.KitId).ToList();
+        // One query for the letters already on record, not one per letter.
+        var onRecord = (await db.Letters.Where(l => draftKits.Contains(l.KitId)).ToListAsync(ct))
+            .ToLookup(l => (l.KitId, l.Sha256, l.InterpretationId));
         var now = clock.GetUtcNow().UtcDateTime;
-        var letters = new List<RenderedLetter>();
-        foreach (var draft in drafts)
+        var letters = new List<RenderedLetter>(drafts.Count);
+        var newlyIssued = 0;
+        for (var i = 0; i < drafts.Count; i++)
         {
-            // A letter still held back is not issued: nothing is recorded that could be confirmed as sent.
-            var release = releases.Of(draft.KitId);
-            if (!release.Released) continue;
-            var pdf = layout.Render(draft.Content);
-            var hash = Convert.ToHexStringLower(SHA256.HashData(pdf));
+            var (draft, file) = (drafts[i], files[i]);
             var stored = draft.Stored;
-            var record = await db.Letters.FirstOrDefaultAsync(l => l.KitId == draft.KitId && l.Sha256 == hash && l.InterpretationId == stored.Id, ct);
+            var record = onRecord[(draft.KitId, file.Sha256, stored.Id)].FirstOrDefault();
             if (record is null)
             {
+                newlyIssued++;
                 record = new IssuedLetter
                 {
                     KitId = draft.KitId, KitCode = draft.KitCode, InterpretationId = stored.Id, ProfileId = stored.ProfileId,
                     ProfileVersion = stored.ProfileVersion, Language = draft.Language, Kind = draft.Kind,
-                    ContentJson = JsonSerializer.Serialize(draft.Content, Json), Sha256 = hash, Pages = LetterPdf.PageCount(pdf),
+                    ContentJson = file.ContentJson, Sha256 = file.Sha256, Pages = file.Pages,
                     IssuedAtUtc = now, IssuedBy = actor.Label, CollectedOn = draft.CollectedOn, CatalogVersion = WordingCatalogue.Version,
                 };
                 db.Letters.Add(record);
             }
             // Recorded before the gate existed (or issued again): it carries its release from now on.
+            var release = releases.Of(draft.KitId);
             if (release.Needed && record.ReleasedBy is null)
                 (record.ReleasedBy, record.ReleasedAtUtc) = (release.ReleasedBy, release.ReleasedAtUtc);
-            letters.Add(new RenderedLetter(record, pdf));
+            letters.Add(new RenderedLetter(record, file.Pdf));
         }
         await db.SaveChangesAsync(ct);
+        ServiceMetrics.LettersIssued(newlyIssued);
         return letters;
+    }
+
+    private sealed record LetterFile(byte[] Pdf, int Pages, string Sha256, string ContentJson);
+
+    /// <summary>
+    /// Renders on every core: a mailing is hundreds of letters, each pure work on its own content (the layout is
+    /// thread-safe and gives the same bytes for the same content whichever thread draws it). Order is kept.
+    /// </summary>
+    private LetterFile[] RenderAll(List<Draft> drafts, CancellationToken ct)
+    {
+        var files = new LetterFile[drafts.Count];
+        Parallel.For(0, drafts.Count, new ParallelOptions { CancellationToken = ct }, i =>
+        {
+            var pdf = layout.Render(drafts[i].Content, out var pages);
+            files[i] = new LetterFile(pdf, pages, Convert.ToHexStringLower(SHA256.HashData(pdf)),
+                JsonSerializer.Serialize(drafts[i].Content, Json));
+        });
+        return files;
     }
 
     /// <summary>
@@ -114,7 +140,8 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
         var sentBefore = (await db.Letters.AsNoTracking().Where(l => kitIds.Contains(l.KitId) && l.SentAtUtc != null)
             .Select(l => l.KitId).Distinct().ToListAsync(ct)).ToHashSet();
 
-        var today = DateOnly.FromDateTime(clock.GetUtcNow().UtcDateTime);
+        // Dated as the household reads the calendar, not by UTC (an evening letter in the Americas said tomorrow).
+        var today = calendar.Today();
         var drafts = new List<Draft>();
         foreach (var kit in kits.OrderBy(k => k.Code, StringComparer.Ordinal))
         {

@@ -156,4 +156,59 @@ public class LetterWorkflowTests
         Assert.All(codes, c => Assert.Equal("interpreted",
             app.WithDb(db => db.Kits.Single(k => k.Code == c).State.ToString().ToLowerInvariant())));
     }
+
+    [Fact]
+    public async Task LetterBatch_RenderedOnEveryCore_EachFileMatchesItsManifestHashAndPagesAndComesOutTheSameTwice()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        for (var i = 0; i < 8; i++)
+            await flow.PostLeadAsync(await flow.ReceivedKitAsync(), firstDraw: 1.0 + i * 4, flushed: 1.0);
+
+        async Task<Dictionary<string, (byte[] Pdf, string[] Row)>> Batch()
+        {
+            var response = await flow.Coordinator.PostAsync("/api/letters/batch", null);
+            await Expect(response, HttpStatusCode.OK);
+            using var zip = new ZipArchive(new MemoryStream(await response.Content.ReadAsByteArrayAsync()));
+            using var manifest = new StreamReader(zip.GetEntry("manifest.csv")!.Open());
+            var rows = (await manifest.ReadToEndAsync()).Split('\n', StringSplitOptions.RemoveEmptyEntries).Skip(1)
+                .Select(line => line.Split(',')).ToDictionary(r => r[0]);
+            return zip.Entries.Where(e => e.FullName.StartsWith("letters/")).ToDictionary(
+                e => rows.Keys.Single(code => e.Name.Contains(code)),
+                e => { using var pdf = new MemoryStream(); e.Open().CopyTo(pdf); return (pdf.ToArray(), rows[rows.Keys.Single(code => e.Name.Contains(code))]); });
+        }
+
+        var first = await Batch();
+        var second = await Batch();
+
+        Assert.Equal(8, first.Count);
+        foreach (var (code, (pdf, row)) in first)
+        {
+            // manifest: kitCode,letterId,kind,language,pages,sha256,status,reason
+            Assert.Equal(Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(pdf)), row[5]);
+            Assert.Equal(LetterPdfText.Read(pdf).Pages, int.Parse(row[4]));
+            Assert.Equal(pdf, second[code].Pdf);
+            Assert.Equal(row[1], second[code].Row[1]);
+        }
+    }
+
+    [Theory]
+    // 01:30 UTC on 11 April 2026 is 20:30 on 10 April in Chicago (CDT, UTC−5; IANA tz database, from memory).
+    [InlineData("America/Chicago", "10 de abril de 2026", 7)]
+    [InlineData("UTC", "11 de abril de 2026", 8)]
+    public async Task Letter_IssuedInTheEvening_DatedAndCountedInTheProgramsTimeZone(string zone, string dated, int days)
+    {
+        using var app = new CommunityLeadFactory(now: new DateTimeOffset(2026, 4, 11, 1, 30, 0, TimeSpan.Zero));
+        app.Settings["Program:TimeZone"] = zone;
+        var flow = new ResultsFlow(app); // collected 2026-04-03; the household reads Spanish
+        var code = await flow.ReceivedKitAsync();
+        await flow.PostLeadAsync(code, firstDraw: 2.0, flushed: 1.0);
+
+        var (pdf, response) = await LetterAsync(flow.Coordinator, code);
+        var letterId = int.Parse(response.Headers.GetValues("X-Letter-Id").Single());
+        var sent = await PostAsync(flow.Coordinator, $"/api/kits/{code}/letter/sent", new { letterId }, HttpStatusCode.OK);
+
+        Assert.Contains(dated, LetterPdfText.Read(pdf).Text.Replace("\n", " "), StringComparison.Ordinal);
+        Assert.Equal(days, sent["daysFromCollection"]!.GetValue<int>());
+    }
 }

@@ -14,7 +14,9 @@ public sealed class PdfLetterLayout : ILetterLayout
 
     public string ContentType => "application/pdf";
 
-    public byte[] Render(LetterContent content)
+    public byte[] Render(LetterContent content) => Render(content, out _);
+
+    public byte[] Render(LetterContent content, out int pageCount)
     {
         var fonts = LetterFonts.Shared;
         var page = PageGeometry.For(content.Paper);
@@ -42,6 +44,7 @@ public sealed class PdfLetterLayout : ILetterLayout
                 block.Draw(g, top);
             footer.Draw(g, p + 1, pages.Count);
         }
+        pageCount = pages.Count;
         return ReproduciblePdf.Save(document, content);
 
         List<List<(Block Block, double Top)>> Paginate(BodySpacing spacing) => Paginator.Paginate(
