@@ -11,6 +11,7 @@ using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Features.Reports;
 using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Api.Infrastructure.OpenApi;
 using CommunityLead.Rules.Interpretation;
 using Microsoft.Extensions.Options;
 

@@ -3,6 +3,7 @@ using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Letters.Layout;
 using CommunityLead.Api.Features.Operations;
+using CommunityLead.Api.Infrastructure.OpenApi;
 using FluentValidation;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Http.Json;

@@ -3,6 +3,7 @@ using System.Text.RegularExpressions;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters.Composing;
+using CommunityLead.Api.Infrastructure.OpenApi;
 using CommunityLead.Api.Features.Reports;
 using CommunityLead.Rules.Sampling;
 using Microsoft.Extensions.Options;

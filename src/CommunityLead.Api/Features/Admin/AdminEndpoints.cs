@@ -23,8 +23,8 @@ public static class AdminEndpoints
         var group = app.MapGroup("/api/admin").WithTags("Admin")
             .RequireAuthorization(Policies.Admin).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
-        group.MapGet("/keys", ListKeys);
-        group.MapGet("/audit", ReadAudit);
+        group.MapGet("/keys", ListKeys).WithName("listKeys").WithSummary("Every key's label, role and dates (never a secret)");
+        group.MapGet("/audit", ReadAudit).WithName("readAudit").WithSummary("The audit trail, oldest first, in pages");
     }
 
     public static async Task<Ok<List<KeyListing>>> ListKeys(CommunityLeadDb db, CancellationToken ct) =>

@@ -22,8 +22,10 @@ public static class AttentionEndpoints
         var group = app.MapGroup("/api/attention").WithTags("Attention")
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
-        group.MapGet("/", List);
-        group.MapPost("/{id:int}/resolve", Resolve).ProducesProblem(StatusCodes.Status404NotFound);
+        group.MapGet("/", List).WithName("listAttention").WithSummary("Kits needing a person, most urgent first");
+        group.MapPost("/{id:int}/resolve", Resolve).WithName("resolveAttention")
+            .WithSummary("Mark an item done, with a note (for urgent items this releases the letter)")
+            .ProducesValidationProblem().ProducesProblem(StatusCodes.Status404NotFound);
     }
 
     /// <summary>Urgent results first, then action-level homes with a young child or pregnancy, and so on; oldest first within each.</summary>

@@ -14,7 +14,9 @@ public static class HealthEndpoints
     /// fail it; the answer names no server, file or error (anyone may call it).
     /// </summary>
     public static void MapHealth(this IEndpointRouteBuilder app) =>
-        app.MapGet("/health", Check).AllowAnonymous().WithTags("Health");
+        app.MapGet("/health", Check).AllowAnonymous().WithTags("Health").WithName("checkHealth")
+            .WithSummary("Whether this instance can reach its database (no key needed)")
+            .Produces<HealthStatus>(StatusCodes.Status503ServiceUnavailable);
 
     private static async Task<Results<Ok<HealthStatus>, JsonHttpResult<HealthStatus>>> Check(CommunityLeadDb db, CancellationToken ct)
     {

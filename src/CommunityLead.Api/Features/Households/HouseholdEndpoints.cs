@@ -2,6 +2,7 @@ using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Api.Infrastructure.OpenApi;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.EntityFrameworkCore;
 
@@ -17,12 +18,18 @@ public static class HouseholdEndpoints
     {
         var group = app.MapGroup("/api/households").WithTags("Households")
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
-            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
-            .ProducesProblem(StatusCodes.Status404NotFound);
-        group.MapGet("/", HouseholdSearch.Search);
-        group.MapPost("/", SignUp);
-        group.MapGet("/{id:guid}", Get);
-        group.MapPut("/{id:guid}", Update).ProducesProblem(StatusCodes.Status412PreconditionFailed);
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
+        group.MapGet("/", HouseholdSearch.Search).WithName("searchHouseholds")
+            .WithSummary("Find households by name, phone, email, street or postal code");
+        group.MapPost("/", SignUp).WithName("signUpHousehold").WithSummary("Sign a household up")
+            .ProducesValidationProblem();
+        group.MapGet("/{id:guid}", Get).WithName("getHousehold").WithSummary("Read a household with its kits (and its ETag)")
+            .ProducesProblem(StatusCodes.Status404NotFound).WithResponseHeader(StatusCodes.Status200OK, "ETag", "The version to send back in If-Match when editing");
+        group.MapPut("/{id:guid}", Update).WithName("updateHousehold")
+            .WithSummary("Replace a household's details; with If-Match, a stale edit is refused with 412")
+            .WithRequestHeader("If-Match", "The ETag of the read this edit is based on")
+            .ProducesValidationProblem().ProducesProblem(StatusCodes.Status404NotFound)
+            .ProducesProblem(StatusCodes.Status412PreconditionFailed);
     }
 
     public static async Task<Created<HouseholdCreated>> SignUp(

@@ -23,8 +23,8 @@ public static class InterpretationEndpoints
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
             .ProducesProblem(StatusCodes.Status404NotFound).ProducesProblem(StatusCodes.Status409Conflict);
-        group.MapGet("/", Get);
-        group.MapPost("/", Reinterpret);
+        group.MapGet("/", Get).WithName("getInterpretation").WithSummary("What a kit's results mean (stored, or provisional)");
+        group.MapPost("/", Reinterpret).WithName("reinterpretKit").WithSummary("Interpret a kit again now (after a profile change)");
     }
 
     public static async Task<Results<Ok<InterpretationResponse>, ValidationProblem, ProblemHttpResult>> Get(

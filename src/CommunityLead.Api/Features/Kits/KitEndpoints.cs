@@ -1,5 +1,6 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Api.Infrastructure.OpenApi;
 
 namespace CommunityLead.Api.Features.Kits;
 
@@ -16,23 +17,26 @@ public static class KitEndpoints
     public static void MapKits(this IEndpointRouteBuilder app)
     {
         var kits = app.MapGroup("/api/kits").WithTags("Kits").AddEndpointFilter<ValidationFilter>()
-            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
-            .ProducesProblem(StatusCodes.Status404NotFound).ProducesProblem(StatusCodes.Status409Conflict);
+            .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
 
         var coordinator = kits.MapGroup("").RequireAuthorization(Policies.Coordinator);
-        coordinator.MapPost("/", KitMoves.Issue);
-        coordinator.MapGet("/", KitQueries.List);
-        coordinator.MapPost("/{code}/collection", CollectionRecording.Record);
-        coordinator.MapPost("/{code}/cancel", KitMoves.Cancel);
-        coordinator.MapPost("/{code}/lost", KitMoves.MarkLost);
-        coordinator.MapPost("/{code}/reject", KitMoves.Reject);
-        coordinator.MapPost("/{code}/replacement", KitMoves.Replace);
-        coordinator.MapPost("/{code}/close", KitMoves.Close);
+        coordinator.MapPost("/", KitMoves.Issue).WithName("issueKit").WithSummary("Issue a kit to a household")
+            .ProducesProblem(StatusCodes.Status404NotFound);
+        coordinator.MapGet("/", KitQueries.List).WithName("listKits").WithSummary("The work queue: kits by state or household")
+            .WithQuery<CommunityLead.Rules.Kits.KitState>("state", "Only kits in this state");
+        coordinator.MapPost("/{code}/collection", CollectionRecording.Record).WithName("recordCollection")
+            .WithSummary("Record how and when the household took its samples").KitMove();
+        coordinator.MapPost("/{code}/cancel", KitMoves.Cancel).WithName("cancelKit").WithSummary("Cancel a kit with a reason").KitMove();
+        coordinator.MapPost("/{code}/lost", KitMoves.MarkLost).WithName("markKitLost").WithSummary("Mark a kit lost with a reason").KitMove();
+        coordinator.MapPost("/{code}/reject", KitMoves.Reject).WithName("rejectKit").WithSummary("Reject a returned kit with a reason").KitMove();
+        coordinator.MapPost("/{code}/replacement", KitMoves.Replace).WithName("replaceKit").WithSummary("Issue a replacement for a kit").KitMove();
+        coordinator.MapPost("/{code}/close", KitMoves.Close).WithName("closeKit").WithSummary("Close a kit whose letter was sent").KitMove();
 
         var readers = kits.MapGroup("").RequireAuthorization(Policies.KitReader);
-        readers.MapGet("/{code}", KitQueries.Get);
+        readers.MapGet("/{code}", KitQueries.Get).WithName("getKit").WithSummary("Read a kit: state, samples, flags and history")
+            .ProducesProblem(StatusCodes.Status404NotFound);
 
         var receivers = kits.MapGroup("").RequireAuthorization(Policies.KitReceiver);
-        receivers.MapPost("/{code}/receipt", KitMoves.Receive);
+        receivers.MapPost("/{code}/receipt", KitMoves.Receive).WithName("receiveKit").WithSummary("Record that the kit reached the lab").KitMove();
     }
 }

@@ -1,5 +1,6 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Api.Infrastructure.OpenApi;
 using CommunityLead.Rules.Households;
 
 namespace CommunityLead.Api.Features.Letters;
@@ -24,17 +25,24 @@ public static class LetterEndpoints
         var kit = app.MapGroup("/api/kits/{code}").WithTags("Letters")
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden)
-            .ProducesProblem(StatusCodes.Status404NotFound).ProducesProblem(StatusCodes.Status409Conflict);
-        kit.MapGet("/letter", LetterHandlers.Get).Produces(StatusCodes.Status200OK, contentType: "application/pdf");
-        kit.MapPost("/letter/sent", LetterHandlers.MarkSent);
-        kit.MapGet("/letters", LetterHandlers.List);
+            .ProducesProblem(StatusCodes.Status404NotFound);
+        kit.MapGet("/letter", LetterHandlers.Get).WithName("getKitLetter")
+            .WithSummary("The letter for the kit's current interpretation (a preview while urgent items are open)")
+            .Produces(StatusCodes.Status200OK, contentType: "application/pdf").ProducesProblem(StatusCodes.Status409Conflict)
+            .WithQuery<CommunityLead.Rules.Households.LetterLanguage>("lang", "The letter's language; the household's own by default")
+            .WithResponseHeader(StatusCodes.Status200OK, "X-Letter-Id", "The issued letter's id, to confirm it was sent");
+        kit.MapPost("/letter/sent", LetterHandlers.MarkSent).WithName("markLetterSent")
+            .WithSummary("Confirm the letter went out: the kit moves to letter-sent").ProducesProblem(StatusCodes.Status409Conflict);
+        kit.MapGet("/letters", LetterHandlers.List).WithName("listKitLetters").WithSummary("Every letter issued for the kit");
 
         var letters = app.MapGroup("/api/letters").WithTags("Letters")
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
-        letters.MapGet("/{id:int}", LetterHandlers.Rerender).Produces(StatusCodes.Status200OK, contentType: "application/pdf")
+        letters.MapGet("/{id:int}", LetterHandlers.Rerender).WithName("getLetter")
+            .WithSummary("A stored letter, rendered again byte for byte").Produces(StatusCodes.Status200OK, contentType: "application/pdf")
             .ProducesProblem(StatusCodes.Status404NotFound);
-        letters.MapPost("/batch", LetterBatch.Create).Produces(StatusCodes.Status200OK, contentType: "application/zip")
+        letters.MapPost("/batch", LetterBatch.Create).WithName("createLetterBatch")
+            .WithSummary("A ZIP of every kit ready for a letter, with a manifest (held kits listed without a PDF)").Produces(StatusCodes.Status200OK, contentType: "application/zip")
             .RequireRateLimiting(RateLimitSetup.LetterBatches).ProducesProblem(StatusCodes.Status429TooManyRequests);
     }
 }

@@ -2,6 +2,7 @@ using System.Text;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Infrastructure;
+using CommunityLead.Api.Infrastructure.OpenApi;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.Extensions.Options;
 
@@ -15,7 +16,17 @@ public static class ReportEndpoints
         var group = app.MapGroup("/api/reports").WithTags("Reports")
             .RequireAuthorization(Policies.Health).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
-        group.MapGet("/summary", Summary).Produces(StatusCodes.Status200OK, contentType: "text/csv");
+        group.MapGet("/summary", Summary).WithName("getSummary")
+            .WithSummary("Counts and statistics by area, period, age band, service line or band; small counts hidden")
+            .Produces(StatusCodes.Status200OK, contentType: "text/csv").Produces<SummaryReport>(StatusCodes.Status200OK)
+            .WithQuery<DateOnly>("from", "First day of a month, e.g. 2026-04-01")
+            .WithQuery<DateOnly>("to", "Last day of a month, e.g. 2026-06-30")
+            .WithQuery<string>("areaCode", "Only this area")
+            .WithQuery<CommunityLead.Rules.Households.WaterSource>("waterSource", "Only homes on this water source")
+            .WithQuery<string>("ageBand", "Only homes of this age: before-1950, 1950-1985, 1986-and-later or unknown")
+            .WithQuery<CommunityLead.Rules.Households.ServiceLineMaterial>("serviceLine", "Only homes with this service line")
+            .WithQuery<SummaryGrouping>("groupBy", "What the rows are (area by default)")
+            .WithQuery<string>("format", "json (default) or csv");
     }
 
     /// <summary>Aggregates only: no route of this group returns a row about one home.</summary>

@@ -13,7 +13,8 @@ public static class WordingEndpoints
         var group = app.MapGroup("/api/admin").WithTags("Wording")
             .RequireAuthorization(Policies.Admin).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
-        group.MapGet("/messages", Export).Produces(StatusCodes.Status200OK, contentType: "text/csv");
+        group.MapGet("/messages", Export).WithName("exportWording")
+            .WithSummary("Every sentence a household can be shown, for review (JSON or CSV)").Produces(StatusCodes.Status200OK, contentType: "text/csv");
     }
 
     /// <summary>Wording only: no household's data is in it, so the admin role may read it.</summary>
