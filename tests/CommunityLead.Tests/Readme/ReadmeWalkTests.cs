@@ -27,10 +27,10 @@ public class ReadmeWalkTests(ITestOutputHelper output)
         var blocks = ReadmeBlock.Read(await File.ReadAllTextAsync(RepoFiles.PathOf("README.md")));
         Assert.Contains(blocks, b => b.StartsTheService);
         // A curl that prints a 4xx and goes on would let the walk pass a step that failed for the reader too.
-        var unchecked = blocks.Where(b => !b.RunsTheSuite)
+        var unguarded = blocks.Where(b => !b.RunsTheSuite)
             .SelectMany(b => b.Text.Split('\n').Where(l => System.Text.RegularExpressions.Regex.IsMatch(l, @"(^|\$\(|\| )curl ")))
             .Where(l => !l.Contains("--fail-with-body", StringComparison.Ordinal)).ToList();
-        Assert.True(unchecked.Count == 0, "Every README curl says --fail-with-body:\n" + string.Join('\n', unchecked));
+        Assert.True(unguarded.Count == 0, "Every README curl says --fail-with-body:\n" + string.Join('\n', unguarded));
 
         var work = Directory.CreateTempSubdirectory("communitylead-readme-").FullName;
         var port = FreePort();
