@@ -40,7 +40,7 @@ public static class DemoResults
         {
             ParsedBatch parsed;
             await using (var stream = File.OpenRead(file))
-                parsed = await JsonBatchReader.ReadAsync(stream, json, CancellationToken.None);
+                parsed = await JsonBatchReader.ReadAsync(stream, json, new BatchProblemList(options.MaxProblemsListed), CancellationToken.None);
             db.ChangeTracker.Clear();
             // A file is a batch's next version; once that version exists, the file was loaded before.
             var batchId = parsed.Request.BatchId ?? "";

@@ -15,9 +15,9 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
     /// <summary>Kit states in which results are taken: the kit reached the lab and is not closed or void.</summary>
     public static readonly KitState[] AcceptingStates = [KitState.Received, KitState.Analyzed, KitState.Interpreted, KitState.LetterSent];
 
-    public async Task<(CheckedBatch? Batch, List<BatchProblem> Problems)> CheckAsync(ParsedBatch parsed, CancellationToken ct)
+    public async Task<(CheckedBatch? Batch, BatchProblemList Problems)> CheckAsync(ParsedBatch parsed, CancellationToken ct)
     {
-        var problems = new List<BatchProblem>(parsed.Problems);
+        var problems = parsed.Problems;
         var request = parsed.Request;
         CheckHeader(request, problems);
         var rows = request.Results ?? [];
@@ -34,9 +34,7 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
             .ToLookup(s => s.KitId);
 
         var analyzedAt = Time(request.AnalyzedAt);
-        // A cell that did not parse (CSV) is reported already; the row checks must not also call it missing.
-        var unreadable = parsed.Problems.Select(p => p.Key).ToHashSet();
-        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems, unreadable);
+        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems);
         var results = new List<CheckedResult>();
         var seen = new Dictionary<string, string>();
         var rowKits = new List<BatchKit>();
@@ -64,7 +62,7 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         // QC rows name no kit; a batch of soil results has soil QC. Judged by the rows' kits, not only the rows that
         // passed, so that a bad soil row does not also make the soil QC look like water QC with the wrong unit.
         var matrix = rowKits.Count > 0 && rowKits.All(k => k.Kind == KitKind.Soil) ? Matrix.Soil : Matrix.Water;
-        var qc = new QcRowCheck(problems, unreadable).CheckAll(request.Qc ?? [], matrix);
+        var qc = new QcRowCheck(problems).CheckAll(request.Qc ?? [], matrix);
 
         if (problems.Count > 0) return (null, problems);
         return (new CheckedBatch(request.BatchId!, request.Method!, analyzedAt!.Value, request.Correction == true,
@@ -74,7 +72,7 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
     internal static DateTimeOffset? Time(string? text) =>
         text is not null && OffsetRequiredConverter.TryParse(text.Trim(), out var value) ? value : null;
 
-    private void CheckHeader(BatchRequest r, List<BatchProblem> problems)
+    private void CheckHeader(BatchRequest r, BatchProblemList problems)
     {
         if (string.IsNullOrWhiteSpace(r.BatchId)) problems.Add(new("", "batchId", "The lab's batch id is required."));
         else if (r.BatchId.Length > 64 || r.BatchId.Any(c => !(char.IsAsciiLetterOrDigit(c) || c is '-' or '_' or '.')))

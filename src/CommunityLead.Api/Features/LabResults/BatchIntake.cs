@@ -39,10 +39,11 @@ public static class BatchIntake
         try
         {
             var body = new SizeLimitedStream(http.Request.Body, options.MaxBatchBytes);
+            var problems = new BatchProblemList(options.MaxProblemsListed);
             switch (mediaType?.MediaType.Value?.ToLowerInvariant())
             {
-                case "application/json": parsed = await JsonBatchReader.ReadAsync(body, jsonOptions, ct); break;
-                case "text/csv": parsed = await CsvBatchReader.ReadAsync(body, http.Request.Query, ct); break;
+                case "application/json": parsed = await JsonBatchReader.ReadAsync(body, jsonOptions, problems, ct); break;
+                case "text/csv": parsed = await CsvBatchReader.ReadAsync(body, http.Request.Query, problems, ct); break;
                 default: return BatchProblems.UnsupportedType();
             }
         }

@@ -15,9 +15,8 @@ public static class CsvBatchReader
         "reportingLimit", "uncertainty", "replicates", "acidifiedAt", "expected", "measured", "unspiked", "spikeAdded", "duplicate",
     ];
 
-    public static async Task<ParsedBatch> ReadAsync(Stream body, IQueryCollection query, CancellationToken ct)
+    public static async Task<ParsedBatch> ReadAsync(Stream body, IQueryCollection query, BatchProblemList problems, CancellationToken ct)
     {
-        var problems = new List<BatchProblem>();
         var header = ReadQuery(query, problems);
         var results = new List<ResultRow>();
         var qc = new List<QcRow>();
@@ -47,7 +46,7 @@ public static class CsvBatchReader
         return new ParsedBatch(header with { Results = results, Qc = qc }, "csv", problems);
     }
 
-    private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, List<BatchProblem> problems)
+    private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, BatchProblemList problems)
     {
         var index = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
         for (var i = 0; i < headers.Count; i++)
@@ -62,7 +61,7 @@ public static class CsvBatchReader
         return index;
     }
 
-    private static BatchRequest ReadQuery(IQueryCollection query, List<BatchProblem> problems)
+    private static BatchRequest ReadQuery(IQueryCollection query, BatchProblemList problems)
     {
         bool? correction = query["correction"].ToString() switch
         {

@@ -4,7 +4,7 @@ using CommunityLead.Rules.LabResults;
 namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>Checks that each QC row is complete for its type, and normalises it to the results' units.</summary>
-internal sealed class QcRowCheck(List<BatchProblem> problems, IReadOnlySet<string> unreadable)
+internal sealed class QcRowCheck(BatchProblemList problems)
 {
     public List<CheckedQc> CheckAll(IReadOnlyList<QcRow> rows, Matrix matrix)
     {
@@ -31,7 +31,7 @@ internal sealed class QcRowCheck(List<BatchProblem> problems, IReadOnlySet<strin
         foreach (var field in Required(type).Where(f => Value(row, f) is null))
         {
             incomplete = true;
-            if (!unreadable.Contains($"{row.Where}/{field}")) Problem(field, $"A {KebabEnum.Name(type)} needs '{field}'.");
+            if (row.Unreadable?.Contains(field) != true) Problem(field, $"A {KebabEnum.Name(type)} needs '{field}'.");
         }
         foreach (var field in new[] { "expected", "spikeAdded", "duplicate", "unspiked" })
             if (Value(row, field) is < 0) Problem(field, "Cannot be negative.");
