@@ -46,7 +46,7 @@ public static class DemoResults
             var batchId = parsed.Request.BatchId ?? "";
             var version = versions[batchId] = versions.GetValueOrDefault(batchId) + 1;
             if (await db.LabBatches.AnyAsync(b => b.BatchId == batchId && b.Version >= version)) continue;
-            var outcome = await BatchIntake.IngestAsync(parsed, db, options, json, clock, interpreting, repair, Lab, CancellationToken.None);
+            var outcome = await BatchIntake.IngestAsync(parsed, new BatchIntakeContext(db, options, json, clock, interpreting, repair, Lab), CancellationToken.None);
             if (outcome.Result is ProblemHttpResult problem)
             {
                 error.WriteLine($"{file}: {problem.ProblemDetails.Title} {problem.ProblemDetails.Detail}");
