@@ -46,7 +46,10 @@ try
 catch (BatchRefusedProblem refused)
 {
     Console.Error.WriteLine($"{refused.Title} {refused.Detail}");
-    foreach (var problem in refused.Problems ?? []) Console.Error.WriteLine($"  {problem.Row}: {problem.Field}: {problem.Reason}");
+    var reasons = refused.Errors?.AdditionalData ?? new Dictionary<string, object>();
+    foreach (var problem in refused.Problems ?? [])
+        Console.Error.WriteLine($"  {problem.Row}: {problem.Field}: {string.Join(" ", Reasons(reasons, problem.Key))}");
+    if (refused.Note is { } note) Console.Error.WriteLine(note);
     return 1;
 }
 catch (ApiException failed)
@@ -59,3 +62,9 @@ catch (JsonException bad)
     Console.Error.WriteLine($"{argument} is not a JSON batch: {bad.Message}");
     return 1;
 }
+
+// Kiota keeps the reasons of `errors` (a map of arrays) as untyped nodes.
+static IEnumerable<string> Reasons(IDictionary<string, object> errors, string? key) =>
+    key is not null && errors.TryGetValue(key, out var value) && value is Microsoft.Kiota.Abstractions.Serialization.UntypedArray list
+        ? list.GetValue().OfType<Microsoft.Kiota.Abstractions.Serialization.UntypedString>().Select(s => s.GetValue() ?? "")
+        : [];

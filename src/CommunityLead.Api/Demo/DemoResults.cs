@@ -40,13 +40,13 @@ public static class DemoResults
         {
             ParsedBatch parsed;
             await using (var stream = File.OpenRead(file))
-                parsed = await JsonBatchReader.ReadAsync(stream, json, CancellationToken.None);
+                parsed = await JsonBatchReader.ReadAsync(stream, json, new BatchProblemList(options.MaxProblemsListed), CancellationToken.None);
             db.ChangeTracker.Clear();
             // A file is a batch's next version; once that version exists, the file was loaded before.
             var batchId = parsed.Request.BatchId ?? "";
             var version = versions[batchId] = versions.GetValueOrDefault(batchId) + 1;
             if (await db.LabBatches.AnyAsync(b => b.BatchId == batchId && b.Version >= version)) continue;
-            var outcome = await BatchIntake.IngestAsync(parsed, db, options, json, clock, interpreting, repair, Lab, CancellationToken.None);
+            var outcome = await BatchIntake.IngestAsync(parsed, new BatchIntakeContext(db, options, json, clock, interpreting, repair, Lab), CancellationToken.None);
             if (outcome.Result is ProblemHttpResult problem)
             {
                 error.WriteLine($"{file}: {problem.ProblemDetails.Title} {problem.ProblemDetails.Detail}");

@@ -55,7 +55,7 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
     }
 
     private static bool OwnMessage(JsonException json) =>
-        json.Message is OffsetRequiredConverter.Message or NoNulText.Message;
+        json.Message is OffsetRequiredConverter.Message or NoNulText.Message or FiniteNumbers.Message;
 
     // Our own converters throw messages written for people; System.Text.Json's own ones mention .NET types.
     private static string Explain(JsonException json, Type? fieldType)

@@ -28,6 +28,7 @@ public static class SettingsChecks
         Add<LabIntakeOptions>(services, configuration, "LabIntake", (s, p) =>
         {
             p.AtLeast(s.MaxBatchBytes, 1, nameof(s.MaxBatchBytes));
+            p.AtLeast(s.MaxProblemsListed, 1, nameof(s.MaxProblemsListed));
             p.Window(s.Qc.CalibrationCheckLowPercent, s.Qc.CalibrationCheckHighPercent, "Qc:CalibrationCheckLowPercent", "Qc:CalibrationCheckHighPercent");
             p.Window(s.Qc.FortifiedBlankLowPercent, s.Qc.FortifiedBlankHighPercent, "Qc:FortifiedBlankLowPercent", "Qc:FortifiedBlankHighPercent");
             p.Window(s.Qc.MatrixSpikeLowPercent, s.Qc.MatrixSpikeHighPercent, "Qc:MatrixSpikeLowPercent", "Qc:MatrixSpikeHighPercent");

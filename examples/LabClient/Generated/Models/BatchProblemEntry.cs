@@ -20,13 +20,13 @@ namespace CommunityLead.LabClient.Api.Models
 #else
         public string Field { get; set; }
 #endif
-        /// <summary>The reason property</summary>
+        /// <summary>The key property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
 #nullable enable
-        public string? Reason { get; set; }
+        public string? Key { get; set; }
 #nullable restore
 #else
-        public string Reason { get; set; }
+        public string Key { get; set; }
 #endif
         /// <summary>The row property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
@@ -55,7 +55,7 @@ namespace CommunityLead.LabClient.Api.Models
             return new Dictionary<string, Action<IParseNode>>
             {
                 { "field", n => { Field = n.GetStringValue(); } },
-                { "reason", n => { Reason = n.GetStringValue(); } },
+                { "key", n => { Key = n.GetStringValue(); } },
                 { "row", n => { Row = n.GetStringValue(); } },
             };
         }
@@ -67,7 +67,7 @@ namespace CommunityLead.LabClient.Api.Models
         {
             if(ReferenceEquals(writer, null)) throw new ArgumentNullException(nameof(writer));
             writer.WriteStringValue("field", Field);
-            writer.WriteStringValue("reason", Reason);
+            writer.WriteStringValue("key", Key);
             writer.WriteStringValue("row", Row);
         }
     }

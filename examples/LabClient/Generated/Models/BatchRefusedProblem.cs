@@ -39,6 +39,16 @@ namespace CommunityLead.LabClient.Api.Models
 #endif
         /// <summary>The primary error message.</summary>
         public override string Message { get => base.Message; }
+        /// <summary>The note property</summary>
+#if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
+#nullable enable
+        public string? Note { get; set; }
+#nullable restore
+#else
+        public string Note { get; set; }
+#endif
+        /// <summary>The problemCount property</summary>
+        public int? ProblemCount { get; set; }
         /// <summary>The problems property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
 #nullable enable
@@ -47,6 +57,8 @@ namespace CommunityLead.LabClient.Api.Models
 #else
         public List<global::CommunityLead.LabClient.Api.Models.BatchProblemEntry> Problems { get; set; }
 #endif
+        /// <summary>The problemsListed property</summary>
+        public int? ProblemsListed { get; set; }
         /// <summary>The status property</summary>
         public int? Status { get; set; }
         /// <summary>The title property</summary>
@@ -86,7 +98,10 @@ namespace CommunityLead.LabClient.Api.Models
                 { "detail", n => { Detail = n.GetStringValue(); } },
                 { "errors", n => { Errors = n.GetObjectValue<global::CommunityLead.LabClient.Api.Models.BatchRefusedProblem_errors>(global::CommunityLead.LabClient.Api.Models.BatchRefusedProblem_errors.CreateFromDiscriminatorValue); } },
                 { "instance", n => { Instance = n.GetStringValue(); } },
+                { "note", n => { Note = n.GetStringValue(); } },
+                { "problemCount", n => { ProblemCount = n.GetIntValue(); } },
                 { "problems", n => { Problems = n.GetCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.BatchProblemEntry>(global::CommunityLead.LabClient.Api.Models.BatchProblemEntry.CreateFromDiscriminatorValue)?.AsList(); } },
+                { "problemsListed", n => { ProblemsListed = n.GetIntValue(); } },
                 { "status", n => { Status = n.GetIntValue(); } },
                 { "title", n => { Title = n.GetStringValue(); } },
                 { "type", n => { Type = n.GetStringValue(); } },
@@ -102,7 +117,10 @@ namespace CommunityLead.LabClient.Api.Models
             writer.WriteStringValue("detail", Detail);
             writer.WriteObjectValue<global::CommunityLead.LabClient.Api.Models.BatchRefusedProblem_errors>("errors", Errors);
             writer.WriteStringValue("instance", Instance);
+            writer.WriteStringValue("note", Note);
+            writer.WriteIntValue("problemCount", ProblemCount);
             writer.WriteCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.BatchProblemEntry>("problems", Problems);
+            writer.WriteIntValue("problemsListed", ProblemsListed);
             writer.WriteIntValue("status", Status);
             writer.WriteStringValue("title", Title);
             writer.WriteStringValue("type", Type);

@@ -28,7 +28,9 @@ public sealed class CollectionValidator : AbstractValidator<CollectionRequest>
     {
         RuleFor(r => r.Samples).NotEmpty().WithMessage("Record at least one bottle.")
             .Must(s => s is null || s.Count <= 30).WithMessage("A kit holds at most 30 bottles.");
-        RuleForEach(r => r.Samples).SetValidator(new SampleValidator(clock));
+        // A null in the list ("samples": [null]) is a bottle with nothing said about it, not one to skip.
+        RuleForEach(r => r.Samples).NotNull().WithMessage("Each bottle is an object with its fields; remove the null.")
+            .SetValidator(new SampleValidator(clock));
     }
 }
 

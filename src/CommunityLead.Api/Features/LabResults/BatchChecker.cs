@@ -8,22 +8,45 @@ namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>
 /// Every check a batch must pass before anything is written. It collects all problems rather than stopping at
-/// the first, so the lab can fix its file in one go.
+/// the first, so the lab can fix its file in one go. Rows are checked a chunk at a time (<see cref="AddResultsAsync"/>),
+/// so a streamed batch is checked as it is read; once a problem is found, checked rows are no longer kept, since
+/// the batch will be refused, and a file of bad rows costs no more memory than a chunk.
 /// </summary>
 public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, TimeProvider clock)
 {
+    /// <summary>Rows looked up together: few enough to hold, many enough that queries stay few.</summary>
+    public const int ChunkSize = 2_000;
+
     /// <summary>Kit states in which results are taken: the kit reached the lab and is not closed or void.</summary>
     public static readonly KitState[] AcceptingStates = [KitState.Received, KitState.Analyzed, KitState.Interpreted, KitState.LetterSent];
 
-    public async Task<(CheckedBatch? Batch, List<BatchProblem> Problems)> CheckAsync(ParsedBatch parsed, CancellationToken ct)
-    {
-        var problems = new List<BatchProblem>(parsed.Problems);
-        var request = parsed.Request;
-        CheckHeader(request, problems);
-        var rows = request.Results ?? [];
-        if (rows.Count == 0) problems.Add(new("", "results", "A batch needs at least one result."));
+    private BatchProblemList problems = new(0);
+    private DateTimeOffset? analyzedAt;
+    private List<CheckedResult> results = [];
+    // Kit, bottle and analyte of every row that passed, with where it was: a second report of one is a problem.
+    private readonly Dictionary<string, string> seen = [];
+    private int rows;
+    private bool anyKit, allSoil = true;
 
-        var codes = rows.Select(r => KitCode.Parse(r.KitCode)).ToList();
+    public async Task<(CheckedBatch? Batch, BatchProblemList Problems)> CheckAsync(ParsedBatch parsed, CancellationToken ct)
+    {
+        Begin(parsed.Request, parsed.Problems);
+        foreach (var chunk in (parsed.Request.Results ?? []).Chunk(ChunkSize)) await AddResultsAsync(chunk, ct);
+        return (Finish(parsed.Request, parsed.Request.Qc ?? []), problems);
+    }
+
+    /// <summary>Checks the batch's own fields; problems found from here on go to <paramref name="list"/>.</summary>
+    public void Begin(BatchRequest header, BatchProblemList list)
+    {
+        problems = list;
+        CheckHeader(header);
+        analyzedAt = Time(header.AnalyzedAt);
+    }
+
+    public async Task AddResultsAsync(IReadOnlyList<ResultRow> chunk, CancellationToken ct)
+    {
+        rows += chunk.Count;
+        var codes = chunk.Select(r => KitCode.Parse(r.KitCode)).ToList();
         var wanted = codes.Where(c => c.IsValid).Select(c => c.Code!).Distinct().ToList();
         var kits = await db.Kits.AsNoTracking().Where(k => wanted.Contains(k.Code))
             .Select(k => new BatchKit(k.Id, k.Code, k.Kind, k.State)).ToDictionaryAsync(k => k.Code, ct);
@@ -32,17 +55,10 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
                 .Select(x => new SampleFacts(x.KitId, x.Sample.Bottle, x.Sample.Position, x.Sample.Location, x.Sample.CollectedAt))
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId);
-
-        var analyzedAt = Time(request.AnalyzedAt);
-        // A cell that did not parse (CSV) is reported already; the row checks must not also call it missing.
-        var unreadable = parsed.Problems.Select(p => p.Key).ToHashSet();
-        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems, unreadable);
-        var results = new List<CheckedResult>();
-        var seen = new Dictionary<string, string>();
-        var rowKits = new List<BatchKit>();
-        for (var i = 0; i < rows.Count; i++)
+        var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems);
+        for (var i = 0; i < chunk.Count; i++)
         {
-            var row = rows[i];
+            var row = chunk[i];
             if (!codes[i].IsValid)
             {
                 problems.Add(new(row.Where, "kitCode", codes[i].Error!));
@@ -53,28 +69,35 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
                 problems.Add(new(row.Where, "kitCode", $"No kit {codes[i].Code} was issued here."));
                 continue;
             }
-            rowKits.Add(kit);
+            anyKit = true;
+            allSoil &= kit.Kind == KitKind.Soil;
             if (rowCheck.Check(row, kit, samples[kit.Id]) is not { } result) continue;
             var key = $"{kit.Code}|{result.Bottle}|{row.Position}|{result.Location}|{result.Analyte}";
             if (!seen.TryAdd(key, row.Where))
                 problems.Add(new(row.Where, "analyte", $"This kit, bottle and analyte were already reported at {seen[key]}."));
-            else
+            else if (problems.Count == 0)
                 results.Add(result);
         }
+        if (problems.Count > 0 && results.Count > 0) results = [];
+    }
+
+    /// <summary>After the last row: the QC rows, then the batch if nothing was wrong.</summary>
+    public CheckedBatch? Finish(BatchRequest header, IReadOnlyList<QcRow> qcRows)
+    {
+        if (rows == 0) problems.Add(new("", "results", "A batch needs at least one result."));
         // QC rows name no kit; a batch of soil results has soil QC. Judged by the rows' kits, not only the rows that
         // passed, so that a bad soil row does not also make the soil QC look like water QC with the wrong unit.
-        var matrix = rowKits.Count > 0 && rowKits.All(k => k.Kind == KitKind.Soil) ? Matrix.Soil : Matrix.Water;
-        var qc = new QcRowCheck(problems, unreadable).CheckAll(request.Qc ?? [], matrix);
-
-        if (problems.Count > 0) return (null, problems);
-        return (new CheckedBatch(request.BatchId!, request.Method!, analyzedAt!.Value, request.Correction == true,
-            request.CorrectionReason, results, qc), problems);
+        var matrix = anyKit && allSoil ? Matrix.Soil : Matrix.Water;
+        var qc = new QcRowCheck(problems).CheckAll(qcRows, matrix);
+        if (problems.Count > 0) return null;
+        return new CheckedBatch(header.BatchId!, header.Method!, analyzedAt!.Value, header.Correction == true,
+            header.CorrectionReason, results, qc);
     }
 
     internal static DateTimeOffset? Time(string? text) =>
         text is not null && OffsetRequiredConverter.TryParse(text.Trim(), out var value) ? value : null;
 
-    private void CheckHeader(BatchRequest r, List<BatchProblem> problems)
+    private void CheckHeader(BatchRequest r)
     {
         if (string.IsNullOrWhiteSpace(r.BatchId)) problems.Add(new("", "batchId", "The lab's batch id is required."));
         else if (r.BatchId.Length > 64 || r.BatchId.Any(c => !(char.IsAsciiLetterOrDigit(c) || c is '-' or '_' or '.')))

@@ -1,4 +1,3 @@
-using System.Security.Cryptography;
 using System.Text.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
@@ -15,6 +14,10 @@ using Microsoft.Extensions.Options;
 using Microsoft.Net.Http.Headers;
 
 namespace CommunityLead.Api.Features.LabResults;
+
+/// <summary>Everything intake needs besides the batch, gathered once per request (and by the demo loader).</summary>
+public sealed record BatchIntakeContext(CommunityLeadDb Db, LabIntakeOptions Options, JsonSerializerOptions JsonOptions, TimeProvider Clock,
+    InterpretWithResults Interpreting, InterpretationRepair Repair, Actor Actor);
 
 /// <summary>
 /// POST /api/lab/batches: read (JSON or CSV, streamed, size-limited), check everything, then either refuse the
@@ -35,14 +38,20 @@ public static class BatchIntake
         if (http.Features.Get<IHttpMaxRequestBodySizeFeature>() is { IsReadOnly: false } serverLimit)
             serverLimit.MaxRequestBodySize = null;
         MediaTypeHeaderValue.TryParse(http.Request.ContentType, out var mediaType);
-        ParsedBatch parsed;
+        var intake = new BatchIntakeContext(db, options, jsonOptions, clock, interpreting, repair, Actor.From(http.User));
+        Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult> outcome;
         try
         {
             var body = new SizeLimitedStream(http.Request.Body, options.MaxBatchBytes);
+            var problems = new BatchProblemList(options.MaxProblemsListed);
             switch (mediaType?.MediaType.Value?.ToLowerInvariant())
             {
-                case "application/json": parsed = await JsonBatchReader.ReadAsync(body, jsonOptions, ct); break;
-                case "text/csv": parsed = await CsvBatchReader.ReadAsync(body, http.Request.Query, ct); break;
+                case "application/json":
+                    var parsed = await JsonBatchReader.ReadAsync(body, jsonOptions, problems, ct);
+                    outcome = await IngestAsync(parsed, intake, ct);
+                    break;
+                // Checked while it is read: a CSV batch of any size is never held whole (CsvIntake).
+                case "text/csv": outcome = await CsvIntake.IngestAsync(body, http.Request.Query, problems, intake, ct); break;
                 default: return BatchProblems.UnsupportedType();
             }
         }
@@ -56,7 +65,6 @@ public static class BatchIntake
             throw new BadHttpRequestException("The batch is not valid JSON.", StatusCodes.Status400BadRequest, e);
         }
 
-        var outcome = await IngestAsync(parsed, db, options, jsonOptions, clock, interpreting, repair, Actor.From(http.User), ct);
         switch (outcome.Result)
         {
             case Created<BatchOutcome> { Value: { } stored }: ServiceMetrics.BatchStored(stored.Status, stored.ResultCount); break;
@@ -66,48 +74,62 @@ public static class BatchIntake
     }
 
     /// <summary>
-    /// Everything after reading: checks, idempotency, QC, effects and interpretation in one transaction. Also used by
-    /// the demo loader, so demo batches take exactly the path a lab's do. <paramref name="ct"/> stops it only until
-    /// writing begins.
+    /// Everything after reading a whole batch (JSON): checks, idempotency, QC, effects and interpretation in one
+    /// transaction. Also used by the demo loader, so demo batches take exactly the path a lab's do.
+    /// <paramref name="ct"/> stops it only until writing begins.
     /// </summary>
     public static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> IngestAsync(ParsedBatch parsed,
-        CommunityLeadDb db, LabIntakeOptions options, JsonSerializerOptions jsonOptions, TimeProvider clock,
-        InterpretWithResults interpreting, InterpretationRepair repair, Actor actor, CancellationToken ct)
+        BatchIntakeContext intake, CancellationToken ct)
     {
         // A repeat is recognised before the checks: a retry must get the original outcome even when its kits
         // have moved on since (closed, say), which the checks would now refuse.
-        var hash = ContentHash(parsed.Request, jsonOptions);
-        var latest = parsed.Problems.Count == 0 && parsed.Request.BatchId is { } batchId
-            ? await db.LabBatches.AsNoTracking().Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct)
-            : null;
-        if (latest?.ContentHash == hash)
-        {
-            // A lab posts again when its first post timed out. Results stored before they shared a transaction
-            // with interpretation may have been left uninterpreted then: this batch's kits are repaired now
-            // rather than at the next sweep. On a sound store this finds nothing and writes nothing.
-            if (latest.InEffect) await repair.RepairAsync(new RepairScope(BatchKey: latest.Id), CancellationToken.None);
-            return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, ct));
-        }
+        var hash = ContentHash(parsed.Request, intake.JsonOptions);
+        var latest = parsed.Problems.Count == 0 ? await LatestAsync(intake.Db, parsed.Request.BatchId, ct) : null;
+        if (latest?.ContentHash == hash) return await ReplayAsync(latest, intake);
 
-        var (batch, problems) = await new BatchChecker(db, options, clock).CheckAsync(parsed, ct);
+        var (batch, problems) = await new BatchChecker(intake.Db, intake.Options, intake.Clock).CheckAsync(parsed, ct);
         if (batch is null) return BatchProblems.Unprocessable(problems);
+        return await StoreAsync(batch, latest, hash, parsed.Format, intake, ct);
+    }
+
+    internal static Task<LabBatch?> LatestAsync(CommunityLeadDb db, string? batchId, CancellationToken ct) => batchId is null
+        ? Task.FromResult<LabBatch?>(null)
+        : db.LabBatches.AsNoTracking().Where(b => b.BatchId == batchId).OrderByDescending(b => b.Version).FirstOrDefaultAsync(ct);
+
+    /// <summary>
+    /// A lab posts again when its first post timed out. Results stored before they shared a transaction with
+    /// interpretation may have been left uninterpreted then: this batch's kits are repaired now rather than at the
+    /// next sweep. On a sound store this finds nothing and writes nothing.
+    /// </summary>
+    internal static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> ReplayAsync(LabBatch latest,
+        BatchIntakeContext intake)
+    {
+        if (latest.InEffect) await intake.Repair.RepairAsync(new RepairScope(BatchKey: latest.Id), CancellationToken.None);
+        return TypedResults.Ok(await BatchViews.OutcomeAsync(intake.Db, latest, intake.JsonOptions, CancellationToken.None));
+    }
+
+    /// <summary>A checked batch that is no repeat: a new batch, or a new version of one (a correction), in one transaction.</summary>
+    internal static async Task<Results<Created<BatchOutcome>, Ok<BatchOutcome>, ProblemHttpResult>> StoreAsync(CheckedBatch batch,
+        LabBatch? latest, string hash, string format, BatchIntakeContext intake, CancellationToken ct)
+    {
+        var (db, options, actor) = (intake.Db, intake.Options, intake.Actor);
         if (latest is not null && !batch.Correction) return BatchProblems.ChangedContent(batch.BatchId, latest.Version);
         if (latest is null && batch.Correction)
             return BatchProblems.Unprocessable([new("", "correction", $"There is no batch {batch.BatchId} to correct.")]);
         if (latest is not null && await BatchCorrections.RowsLeftOutAsync(db, batch.BatchId, batch, ct) is { Count: > 0 } leftOut)
             return BatchProblems.Unprocessable(leftOut);
 
-        var now = clock.GetUtcNow().UtcDateTime;
-        var entity = BatchRecords.NewBatch(batch, (latest?.Version ?? 0) + 1, hash, parsed.Format, options.Qc, actor, now, jsonOptions);
+        var now = intake.Clock.GetUtcNow().UtcDateTime;
+        var entity = BatchRecords.NewBatch(batch, (latest?.Version ?? 0) + 1, hash, format, options.Qc, actor, now, intake.JsonOptions);
         db.LabBatches.Add(entity);
         db.AuditTrail.Add(Audit.Batch(actor, now, entity.BatchId, batch.Correction ? "post-correction" : "post",
             KebabEnum.Name(entity.Status), entity.CorrectionReason,
-            $"version {entity.Version}, {entity.ResultCount} results, {parsed.Format}, QC {(entity.Status == BatchStatus.Held ? "failed" : "passed")}"));
+            $"version {entity.Version}, {entity.ResultCount} results, {format}, QC {(entity.Status == BatchStatus.Held ? "failed" : "passed")}"));
         var effects = entity.InEffect ? await BatchEffects.ApplyAsync(db, entity, entity.Results, actor, now, ct) : null;
         if (effects?.Conflict is { } illegal) return illegal;
         try
         {
-            await interpreting.SaveAsync(effects?.Analyzed ?? [], actor, now);
+            await intake.Interpreting.SaveAsync(effects?.Analyzed ?? [], actor, now);
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
@@ -115,11 +137,9 @@ public static class BatchIntake
             return BatchProblems.Raced(batch.BatchId);
         }
         return TypedResults.Created($"/api/lab/batches/{Uri.EscapeDataString(entity.BatchId)}",
-            await BatchViews.OutcomeAsync(db, entity, jsonOptions, ct));
+            await BatchViews.OutcomeAsync(db, entity, intake.JsonOptions, ct));
     }
 
     /// <summary>Hash of what the lab reported, without the correction note, so a repeated correction is recognised too.</summary>
-    internal static string ContentHash(BatchRequest request, JsonSerializerOptions options) =>
-        Convert.ToHexStringLower(SHA256.HashData(JsonSerializer.SerializeToUtf8Bytes(
-            request with { Correction = null, CorrectionReason = null }, options)));
+    internal static string ContentHash(BatchRequest request, JsonSerializerOptions options) => BatchHash.Of(request, options);
 }

@@ -6,23 +6,37 @@ namespace CommunityLead.Api.Features.LabResults;
 public static class BatchProblems
 {
     /// <summary>
-    /// 422 with every problem: <c>errors</c> keyed "/results/3/unit" (JSON pointer) or "row 5/unit" (CSV line,
-    /// header = line 1), and the same list as <c>problems</c> with row, field and reason apart.
+    /// 422 with the first problems (setting LabIntake:MaxProblemsListed) and the count of all: <c>errors</c> keyed
+    /// "/results/3/unit" (JSON pointer) or "row 5/unit" (CSV line, header = line 1) holds each reason, and
+    /// <c>problems</c> the same problems in file order with row and field apart and the <c>key</c> to their reason.
+    /// The reason is said once, in <c>errors</c>, because that is the contract's field (API.md) and what every
+    /// problem-details reader and our other routes use; <c>problems</c> keeps its place, order, row and field for
+    /// the labs' tools that walk it, and no longer repeats the text, which once doubled a large answer.
     /// </summary>
-    public static ProblemHttpResult Unprocessable(IReadOnlyList<BatchProblem> problems)
+    public static ProblemHttpResult Unprocessable(BatchProblemList problems)
     {
-        var errors = problems.GroupBy(p => p.Key).ToDictionary(g => g.Key, g => g.Select(p => p.Reason).ToArray());
-        return TypedResults.Problem(new HttpValidationProblemDetails(errors)
+        var listed = problems.Listed;
+        var errors = listed.GroupBy(p => p.Key).ToDictionary(g => g.Key, g => g.Select(p => p.Reason).ToArray());
+        var cut = listed.Count < problems.Count;
+        var details = new HttpValidationProblemDetails(errors)
         {
             Status = StatusCodes.Status422UnprocessableEntity,
             Title = "The batch was refused; nothing was stored.",
-            Detail = $"{problems.Count} problem(s). Fix them and post the whole batch again.",
+            Detail = $"{problems.Count:N0} problem(s). Fix them and post the whole batch again.",
             Extensions =
             {
-                ["problems"] = problems.Select(p => new { row = p.Where.Length == 0 ? null : p.Where, field = p.Field, reason = p.Reason }).ToArray(),
+                ["problems"] = listed.Select(p => new { row = p.Where.Length == 0 ? null : p.Where, field = p.Field, key = p.Key }).ToArray(),
+                ["problemCount"] = problems.Count,
+                ["problemsListed"] = listed.Count,
             },
-        });
+        };
+        if (cut)
+            details.Extensions["note"] = $"Only the first {listed.Count:N0} of {problems.Count:N0} problems are listed. " +
+                "Fix these (often one mistake repeated on every row) and post the batch again to see any others.";
+        return TypedResults.Problem(details);
     }
+
+    public static ProblemHttpResult Unprocessable(IEnumerable<BatchProblem> problems) => Unprocessable(BatchProblemList.Of(problems));
 
     public static ProblemHttpResult NotFound(string batchId) =>
         TypedResults.Problem(statusCode: StatusCodes.Status404NotFound, title: "No such batch.", detail: $"No batch {batchId} was posted.");

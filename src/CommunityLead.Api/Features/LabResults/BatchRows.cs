@@ -32,6 +32,9 @@ public sealed record ResultRow(
 {
     /// <summary>Where the row came from: a JSON pointer ("/results/3") or a CSV line ("row 5").</summary>
     [JsonIgnore] public string Where { get; init; } = "";
+
+    /// <summary>Cells of this row that did not parse (CSV), reported already: the checks must not also call them missing.</summary>
+    [JsonIgnore] public IReadOnlyCollection<string>? Unreadable { get; init; }
 }
 
 public sealed record QcRow(
@@ -45,6 +48,8 @@ public sealed record QcRow(
     string? Unit)
 {
     [JsonIgnore] public string Where { get; init; } = "";
+
+    [JsonIgnore] public IReadOnlyCollection<string>? Unreadable { get; init; }
 }
 
 /// <param name="Where">JSON pointer or "row N" (CSV line, header = line 1); empty for the batch itself.</param>
@@ -54,4 +59,5 @@ public sealed record BatchProblem(string Where, string Field, string Reason)
     public string Key => Where.Length == 0 ? Field : $"{Where}/{Field}";
 }
 
-public sealed record ParsedBatch(BatchRequest Request, string Format, IReadOnlyList<BatchProblem> Problems);
+/// <param name="Problems">What reading found (CSV cells, columns, query values); the checks add theirs to the same list.</param>
+public sealed record ParsedBatch(BatchRequest Request, string Format, BatchProblemList Problems);

@@ -15,12 +15,25 @@ public static class CsvBatchReader
         "reportingLimit", "uncertainty", "replicates", "acidifiedAt", "expected", "measured", "unspiked", "spikeAdded", "duplicate",
     ];
 
-    public static async Task<ParsedBatch> ReadAsync(Stream body, IQueryCollection query, CancellationToken ct)
+    /// <summary>
+    /// Reads the rows, handing results to <paramref name="onResults"/> a chunk at a time as they are read (so the file
+    /// is never held whole) and returning the QC rows, which are few, and how many problems reading itself found.
+    /// </summary>
+    public static async Task<CsvRows> ReadRowsAsync(Stream body, BatchProblemList problems,
+        Func<IReadOnlyList<ResultRow>, Task> onResults, CancellationToken ct)
     {
-        var problems = new List<BatchProblem>();
-        var header = ReadQuery(query, problems);
-        var results = new List<ResultRow>();
+        var start = problems.Count;
+        var foundByOthers = 0;
         var qc = new List<QcRow>();
+        var chunk = new List<ResultRow>(BatchChecker.ChunkSize);
+        async Task Hand()
+        {
+            var before = problems.Count;
+            await onResults(chunk);
+            foundByOthers += problems.Count - before;
+            chunk = new List<ResultRow>(BatchChecker.ChunkSize);
+        }
+
         await using var csv = CsvReader.Create(body, new CsvReaderOptions
         {
             TrackLineNumbers = true,
@@ -32,7 +45,7 @@ public static class CsvBatchReader
         if (csv.Headers.Count == 0)
         {
             problems.Add(new("row 1", "header", "The file is empty; it needs a header row and one row per result."));
-            return new ParsedBatch(header, "csv", problems);
+            return new CsvRows(qc, problems.Count - start);
         }
         var index = MapColumns(csv.Headers, problems);
         while (await csv.ReadAsync(ct))
@@ -40,14 +53,18 @@ public static class CsvBatchReader
             var cells = new CsvCells(csv, index, $"row {csv.LineNumber}", problems);
             var sampleType = cells.Text("sampleType");
             if (sampleType is null || sampleType.Equals("sample", StringComparison.OrdinalIgnoreCase))
-                results.Add(cells.Result());
+            {
+                chunk.Add(cells.Result());
+                if (chunk.Count == BatchChecker.ChunkSize) await Hand();
+            }
             else
                 qc.Add(cells.Qc(sampleType));
         }
-        return new ParsedBatch(header with { Results = results, Qc = qc }, "csv", problems);
+        if (chunk.Count > 0) await Hand();
+        return new CsvRows(qc, problems.Count - start - foundByOthers);
     }
 
-    private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, List<BatchProblem> problems)
+    private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, BatchProblemList problems)
     {
         var index = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
         for (var i = 0; i < headers.Count; i++)
@@ -62,7 +79,8 @@ public static class CsvBatchReader
         return index;
     }
 
-    private static BatchRequest ReadQuery(IQueryCollection query, List<BatchProblem> problems)
+    /// <summary>The batch's own fields, from the query string; results and QC follow in the body.</summary>
+    public static BatchRequest ReadQuery(IQueryCollection query, BatchProblemList problems)
     {
         bool? correction = query["correction"].ToString() switch
         {
@@ -78,3 +96,6 @@ public static class CsvBatchReader
 
     private static string? Blank(string? s) => string.IsNullOrWhiteSpace(s) ? null : s.Trim();
 }
+
+/// <param name="ReadingProblems">Problems found by reading (cells, columns), as against those found by the checks.</param>
+public sealed record CsvRows(IReadOnlyList<QcRow> Qc, int ReadingProblems);

@@ -5,15 +5,23 @@ using CsvHelper;
 namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>Typed access to the cells of one CSV row; a cell that doesn't parse is recorded as a problem.</summary>
-internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> index, string where, List<BatchProblem> problems)
+internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> index, string where, BatchProblemList problems)
 {
+    private List<string>? unreadable;
+
+    private void Unreadable(string column, string reason)
+    {
+        problems.Add(new(where, column, reason));
+        (unreadable ??= []).Add(column);
+    }
+
     public string? Text(string column)
     {
         if (!index.TryGetValue(column, out var i) || i >= csv.FieldCount) return null;
         var value = csv.GetString(i)?.Trim();
         if (NoNulText.Contains(value))
         {
-            problems.Add(new(where, column, NoNulText.Message));
+            Unreadable(column, NoNulText.Message);
             return null;
         }
         return string.IsNullOrEmpty(value) ? null : value;
@@ -23,9 +31,9 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     {
         if (Text(column) is not { } text) return null;
         if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && double.IsFinite(value)) return value;
-        problems.Add(new(where, column, text.Contains(',')
+        Unreadable(column, text.Contains(',')
             ? $"'{text}' is not a number; use a decimal point (12.4), not a comma."
-            : $"'{text}' is not a number."));
+            : $"'{text}' is not a number.");
         return null;
     }
 
@@ -33,7 +41,7 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     {
         if (Text(column) is not { } text) return null;
         if (int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value)) return value;
-        problems.Add(new(where, column, $"'{text}' is not a whole number."));
+        Unreadable(column, $"'{text}' is not a whole number.");
         return null;
     }
 
@@ -45,7 +53,7 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
         {
             if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out var v) || !double.IsFinite(v))
             {
-                problems.Add(new(where, "replicates", $"'{part}' is not a number; separate replicate readings with '|'."));
+                Unreadable("replicates", $"'{part}' is not a number; separate replicate readings with '|'.");
                 return null;
             }
             values.Add(v);
@@ -56,11 +64,11 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     public ResultRow Result() => new(
         Text("kitCode"), Text("bottle"), Whole("position"), Text("location"), Text("analyte"), Number("value"), Text("unit"),
         Text("qualifier"), Number("mdl"), Number("reportingLimit"), Number("uncertainty"), Replicates(), Text("acidifiedAt"))
-    { Where = where };
+    { Where = where, Unreadable = unreadable };
 
     public QcRow Qc(string sampleType) => new(
         sampleType, Text("analyte"), Number("expected"), Number("measured"), Number("unspiked"), Number("spikeAdded"),
         Number("duplicate"), Text("unit"))
-    { Where = where };
+    { Where = where, Unreadable = unreadable };
 
 }

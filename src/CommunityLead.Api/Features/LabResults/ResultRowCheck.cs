@@ -6,8 +6,7 @@ using CommunityLead.Rules.Sampling;
 namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>Checks one result row against its kit and the bottles recorded at collection, and normalises it.</summary>
-internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits holding, List<BatchProblem> problems,
-    IReadOnlySet<string> unreadable)
+internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits holding, BatchProblemList problems)
 {
     public CheckedResult? Check(ResultRow row, BatchKit kit, IEnumerable<SampleFacts> kitSamples)
     {
@@ -17,7 +16,7 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         void Missing(string field, string reason)
         {
             incomplete = true;
-            if (!unreadable.Contains($"{row.Where}/{field}")) Problem(field, reason);
+            if (row.Unreadable?.Contains(field) != true) Problem(field, reason);
         }
 
         if (!BatchChecker.AcceptingStates.Contains(kit.State))
@@ -40,7 +39,7 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (problems.Count == before)
         {
             sample = kitSamples.FirstOrDefault(s => s.Bottle == bottle && s.Position == row.Position && (location is null || s.Location == location));
-            if (sample is null && !unreadable.Contains($"{row.Where}/position"))
+            if (sample is null && row.Unreadable?.Contains("position") != true)
                 Problem("bottle", $"Kit {kit.Code} has no {Describe(bottle, row.Position, location)} recorded at collection.");
         }
 

@@ -20,14 +20,22 @@ public sealed record SummaryRequest(
         ["1986-and-later"] = Reports.AgeBand.From1986, ["unknown"] = Reports.AgeBand.Unknown,
     };
 
+    /// <summary>
+    /// No sample is taken before 2000 (the kits' own earliest time); the far end is ours. Bounded so that a month's
+    /// end plus one day (9999-12-31) never leaves the calendar.
+    /// </summary>
+    public static readonly DateOnly EarliestDate = new(2000, 1, 1), LatestDate = new(2999, 12, 31);
+
     public static (SummaryRequest? Request, Dictionary<string, string[]> Errors) Parse(IQueryCollection q)
     {
         var errors = new Dictionary<string, string[]>();
         DateOnly? Date(string name)
         {
             if (q[name].ToString() is not { Length: > 0 } text) return null;
-            if (DateOnly.TryParseExact(text, "yyyy-MM-dd", out var d)) return d;
-            errors[name] = ["Use a date like 2026-04-01."];
+            if (!DateOnly.TryParseExact(text, "yyyy-MM-dd", out var d)) errors[name] = ["Use a date like 2026-04-01."];
+            else if (d < EarliestDate || d > LatestDate)
+                errors[name] = [$"Reports cover {EarliestDate:yyyy-MM-dd} to {LatestDate:yyyy-MM-dd}; use a date in between."];
+            else return d;
             return null;
         }
         T? Enum<T>(string name) where T : struct, System.Enum

@@ -9,10 +9,17 @@ public sealed record KitStateProblem(
     string CurrentState,
     IReadOnlyList<string> AllowedActions);
 
-/// <summary>One reason a lab batch was refused: the row (a JSON pointer or "row 5", header = row 1), the field, why.</summary>
-public sealed record BatchProblemEntry(string? Row, string Field, string Reason);
+/// <summary>
+/// One problem of a refused lab batch, in file order: the row (a JSON pointer or "row 5", header = row 1), the
+/// field, and the key in <c>errors</c> under which its reason is written.
+/// </summary>
+public sealed record BatchProblemEntry(string? Row, string Field, string Key);
 
+/// <summary>A refused batch: the first problems (LabIntake:MaxProblemsListed), how many there are, and a note when the list is cut.</summary>
 public sealed record BatchRefusedProblem(
     string? Type, string Title, int Status, string? Detail, string? Instance,
     IReadOnlyDictionary<string, string[]> Errors,
-    IReadOnlyList<BatchProblemEntry> Problems);
+    IReadOnlyList<BatchProblemEntry> Problems,
+    int ProblemCount,
+    int ProblemsListed,
+    string? Note);

@@ -30,9 +30,9 @@ internal static class UninterpretedResults
         var options = services.GetRequiredService<IOptions<LabIntakeOptions>>().Value;
         var clock = services.GetRequiredService<TimeProvider>();
 
-        var parsed = await JsonBatchReader.ReadAsync(new MemoryStream(Encoding.UTF8.GetBytes(batch.ToJsonString())), json, default);
+        var parsed = await JsonBatchReader.ReadAsync(new MemoryStream(Encoding.UTF8.GetBytes(batch.ToJsonString())), json, new BatchProblemList(options.MaxProblemsListed), default);
         var (checkedBatch, problems) = await new BatchChecker(db, options, clock).CheckAsync(parsed, default);
-        Assert.True(checkedBatch is not null, string.Join("; ", problems.Select(p => $"{p.Where}/{p.Field}: {p.Reason}")));
+        Assert.True(checkedBatch is not null, string.Join("; ", problems.Listed.Select(p => $"{p.Where}/{p.Field}: {p.Reason}")));
         var now = clock.GetUtcNow().UtcDateTime;
         var entity = BatchRecords.NewBatch(checkedBatch, 1, BatchIntake.ContentHash(parsed.Request, json), parsed.Format, options.Qc,
             Lab, now, json);
