@@ -86,7 +86,7 @@ public static class BatchIntake
             // with interpretation may have been left uninterpreted then: this batch's kits are repaired now
             // rather than at the next sweep. On a sound store this finds nothing and writes nothing.
             if (latest.InEffect) await repair.RepairAsync(new RepairScope(BatchKey: latest.Id), CancellationToken.None);
-            return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, ct));
+            return TypedResults.Ok(await BatchViews.OutcomeAsync(db, latest, jsonOptions, forCoordinator: false, ct));
         }
 
         var (batch, problems) = await new BatchChecker(db, options, clock).CheckAsync(parsed, ct);
@@ -115,7 +115,7 @@ public static class BatchIntake
             return BatchProblems.Raced(batch.BatchId);
         }
         return TypedResults.Created($"/api/lab/batches/{Uri.EscapeDataString(entity.BatchId)}",
-            await BatchViews.OutcomeAsync(db, entity, jsonOptions, ct));
+            await BatchViews.OutcomeAsync(db, entity, jsonOptions, forCoordinator: false, ct));
     }
 
     /// <summary>Hash of what the lab reported, without the correction note, so a repeated correction is recognised too.</summary>
