@@ -36,6 +36,7 @@ public sealed class FieldByFieldConverter<T>(JsonSerializerOptions plain) : Json
     public override T? Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options)
     {
         JsonNode? node;
+        // Broken JSON never gets here: the serializer reads a converter's whole value ahead, and says it is malformed.
         try
         {
             node = JsonNode.Parse(ref reader, new JsonNodeOptions { PropertyNameCaseInsensitive = plain.PropertyNameCaseInsensitive });
