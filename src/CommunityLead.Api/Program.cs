@@ -1,5 +1,6 @@
 using CommunityLead.Api.Commands;
 using CommunityLead.Api.Features.Admin;
+using CommunityLead.Api.Features.Areas;
 using CommunityLead.Api.Features.Attention;
 using CommunityLead.Api.Features.Health;
 using CommunityLead.Api.Features.Households;
@@ -53,6 +54,7 @@ app.UseRateLimiter();
 
 app.MapHealth();
 app.MapOperations();
+app.MapAreas();
 app.MapHouseholds();
 app.MapKits();
 app.MapLabResults();

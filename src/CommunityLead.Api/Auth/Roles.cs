@@ -24,6 +24,8 @@ public static class Policies
     public const string LabReader = "lab-reader";
     public const string Health = "health";
     public const string Admin = "admin";
+    public const string AreaReader = "area-reader";
+    public const string AreaKeeper = "area-keeper";
 
     public static void Add(Microsoft.AspNetCore.Authorization.AuthorizationOptions options)
     {
@@ -34,6 +36,8 @@ public static class Policies
         options.AddPolicy(LabReader, p => p.RequireRole(Roles.Lab, Roles.Coordinator));
         options.AddPolicy(Health, p => p.RequireRole(Roles.Health));
         options.AddPolicy(Admin, p => p.RequireRole(Roles.Admin));
+        options.AddPolicy(AreaReader, p => p.RequireRole(Roles.Coordinator, Roles.Admin, Roles.Health));
+        options.AddPolicy(AreaKeeper, p => p.RequireRole(Roles.Coordinator, Roles.Admin));
         // Nothing is open without a key unless it says so (/health). That every route names its own policy
         // is checked by the role-matrix test, which fails on any route it has no expectation for.
         options.FallbackPolicy = new Microsoft.AspNetCore.Authorization.AuthorizationPolicyBuilder()

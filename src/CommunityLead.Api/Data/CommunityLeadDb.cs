@@ -28,6 +28,7 @@ public class CommunityLeadDb : DbContext
     public DbSet<AttentionItem> Attention => Set<AttentionItem>();
     public DbSet<KitInterpretation> Interpretations => Set<KitInterpretation>();
     public DbSet<IssuedLetter> Letters => Set<IssuedLetter>();
+    public DbSet<Area> Areas => Set<Area>();
 
     protected override void OnModelCreating(ModelBuilder modelBuilder) =>
         modelBuilder.ApplyConfigurationsFromAssembly(typeof(CommunityLeadDb).Assembly);

@@ -2,6 +2,7 @@ using System.Text.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Areas;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Api.Infrastructure;
@@ -44,6 +45,10 @@ public static class DemoLoader
         var collectionValidator = scope.ServiceProvider.GetRequiredService<IValidator<CollectionRequest>>();
         var reasonValidator = scope.ServiceProvider.GetRequiredService<IValidator<ReasonRequest>>();
         var limits = scope.ServiceProvider.GetRequiredService<IOptions<SamplingLimits>>().Value;
+        // Dated with the first sign-up, when the invented program began.
+        var begun = scenario.Households.Select(h => h.Household.ConsentGivenAt?.UtcDateTime ?? DateTime.UnixEpoch).DefaultIfEmpty(DateTime.UnixEpoch).Min();
+        if (!await AddAreasAsync(db, scope.ServiceProvider.GetRequiredService<IValidator<NewAreaRequest>>(), scenario.Areas ?? [], begun, file, error))
+            return null;
         var existing = (await db.Households.Select(h => h.Id).ToListAsync()).ToHashSet();
         int newHouseholds = 0, newKits = 0;
         foreach (var entry in scenario.Households)
@@ -77,6 +82,28 @@ public static class DemoLoader
         await db.SaveChangesAsync();
         if (!await DemoResults.LoadAsync(scope.ServiceProvider, scenario.LettersSent ?? [], error)) return null;
         return new DemoLoadResult(newHouseholds, newKits, scenario.Households.Count - newHouseholds);
+    }
+
+    /// <summary>Areas first, saved, so the household validator finds them; those already there are left as they are.</summary>
+    private static async Task<bool> AddAreasAsync(CommunityLeadDb db, IValidator<NewAreaRequest> validator, IReadOnlyList<NewAreaRequest> areas,
+        DateTime atUtc, string file, TextWriter error)
+    {
+        var known = (await db.Areas.Select(a => a.Code).ToListAsync()).ToHashSet();
+        foreach (var area in areas)
+        {
+            var check = await validator.ValidateAsync(area);
+            if (!check.IsValid)
+            {
+                error.WriteLine($"{file}: area {area.Code}: {string.Join("; ", check.Errors.Select(e => $"{e.PropertyName}: {e.ErrorMessage}"))}");
+                return false;
+            }
+            var code = AreaCodes.Normal(area.Code!);
+            if (!known.Add(code)) continue;
+            db.Areas.Add(new Area { Code = code, Name = area.Name!.Trim() });
+            db.AuditTrail.Add(Audit.Area(Loader, atUtc, code, "add", "demo scenario"));
+        }
+        await db.SaveChangesAsync();
+        return true;
     }
 
     private static Kit AddKit(CommunityLeadDb db, Guid householdId, DemoKit d, Dictionary<string, Kit> earlier, SamplingLimits limits)

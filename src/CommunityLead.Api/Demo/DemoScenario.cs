@@ -1,3 +1,4 @@
+using CommunityLead.Api.Features.Areas;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Kits;
 using CommunityLead.Rules.Kits;
@@ -6,7 +7,9 @@ namespace CommunityLead.Api.Demo;
 
 /// <summary>The shape of seed-data/demo.json: an invented program, its households and their kits.</summary>
 /// <param name="LettersSent">Kits whose letter is issued and confirmed sent once their results are interpreted.</param>
-public sealed record DemoScenario(DemoProgram Program, IReadOnlyList<DemoHousehold> Households, IReadOnlyList<string>? LettersSent = null);
+/// <param name="Areas">The program's areas, added before the households that name them.</param>
+public sealed record DemoScenario(DemoProgram Program, IReadOnlyList<DemoHousehold> Households, IReadOnlyList<string>? LettersSent = null,
+    IReadOnlyList<NewAreaRequest>? Areas = null);
 
 public sealed record DemoProgram(string Name, string Town, string Note);
 

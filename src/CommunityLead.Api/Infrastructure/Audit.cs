@@ -24,4 +24,10 @@ public static class Audit
         AtUtc = atUtc, ActorLabel = actor.Label, ActorRole = actor.Role,
         Subject = "kit", SubjectKey = code, Action = action, FromState = from, ToState = to, Reason = reason, Detail = detail,
     };
+
+    public static AuditEntry Area(Actor actor, DateTime atUtc, string code, string action, string? detail = null) => new()
+    {
+        AtUtc = atUtc, ActorLabel = actor.Label, ActorRole = actor.Role,
+        Subject = "area", SubjectKey = code, Action = action, Detail = detail,
+    };
 }

@@ -58,7 +58,7 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
         json.Message is OffsetRequiredConverter.Message or NoNulText.Message or FiniteNumbers.Message;
 
     // Our own converters throw messages written for people; System.Text.Json's own ones mention .NET types.
-    private static string Explain(JsonException json, Type? fieldType)
+    internal static string Explain(JsonException json, Type? fieldType)
     {
         var message = json.Message;
         if (OwnMessage(json)) return message;

@@ -14,6 +14,7 @@ public static class JsonSetup
         options.Converters.Add(new NullableOffsetRequiredConverter());
         options.Converters.Add(new NoNulText());
         options.Converters.Add(new FiniteNumbers());
+        options.Converters.Add(new FieldByFieldConverterFactory());
         // A misspelt field ("collectedAT") would otherwise be dropped silently and surface later as a
         // confusing flag; naming it in a 400 is kinder.
         options.UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow;

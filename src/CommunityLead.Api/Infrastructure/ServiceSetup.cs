@@ -1,4 +1,5 @@
 using CommunityLead.Api.Auth;
+using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Interpretation;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Letters.Layout;
@@ -33,7 +34,10 @@ public static class ServiceSetup
         services.AddSingleton<IProblemDetailsWriter, AnyClientProblemWriter>();
         services.AddProblemDetails();
         services.AddExceptionHandler<BadRequestExceptionHandler>();
-        services.AddValidatorsFromAssemblyContaining<Program>(ServiceLifetime.Singleton);
+        // The household validator reads the area list, so it lives per request with the DbContext.
+        services.AddValidatorsFromAssemblyContaining<Program>(ServiceLifetime.Singleton, r => r.ValidatorType != typeof(HouseholdValidator));
+        services.AddScoped<IValidator<HouseholdRequest>, HouseholdValidator>();
+        services.AddHttpContextAccessor();
 
         services.AddScoped<ApiKeyService>();
         services.AddSingleton<SignInThrottle>();

@@ -13,14 +13,17 @@ public sealed class ValidationFilter : IEndpointFilter
         foreach (var argument in context.Arguments)
         {
             if (argument is null) continue;
+            // Fields that did not even read (IReadFieldByField) come first; the validator's word on such a field
+            // ("required", since it was left out) would only repeat it.
+            var errors = argument is IReadFieldByField { ReadProblems: { } unread } ? new Dictionary<string, string[]>(unread) : [];
             var validatorType = typeof(IValidator<>).MakeGenericType(argument.GetType());
-            if (context.HttpContext.RequestServices.GetService(validatorType) is not IValidator validator) continue;
-            var result = await validator.ValidateAsync(new ValidationContext<object>(argument), context.HttpContext.RequestAborted);
-            if (!result.IsValid)
-                return TypedResults.ValidationProblem(
-                    result.Errors.GroupBy(e => FieldPath.ToJson(e.PropertyName))
-                        .ToDictionary(g => g.Key, g => g.Select(e => e.ErrorMessage).Distinct().ToArray()),
-                    title: "The request has invalid fields.");
+            if (context.HttpContext.RequestServices.GetService(validatorType) is IValidator validator)
+            {
+                var result = await validator.ValidateAsync(new ValidationContext<object>(argument), context.HttpContext.RequestAborted);
+                foreach (var field in result.Errors.GroupBy(e => FieldPath.ToJson(e.PropertyName)).Where(g => !errors.ContainsKey(g.Key)))
+                    errors[field.Key] = [.. field.Select(e => e.ErrorMessage).Distinct()];
+            }
+            if (errors.Count > 0) return TypedResults.ValidationProblem(errors, title: "The request has invalid fields.");
         }
         return await next(context);
     }

@@ -40,6 +40,8 @@ public enum AttentionFlag
     SuspectedServiceLine,
     RetestNeeded,
     CorrectedAfterLetter,
+    /// <summary>Results came in for a kit whose collection form was never recorded: they wait for it.</summary>
+    AwaitingCollection,
 }
 
 /// <param name="LevelValue">The level the value was compared with, in <paramref name="Unit"/>; null when none applies.</param>

@@ -51,8 +51,9 @@ public static class KitLifecycle
         [KitState.LetterSent] = new()
         {
             // A corrected result after the letter: back to analyzed, so it is interpreted and written again.
+            // No send-letter here: the letter of the current interpretation was sent, so offering it again would
+            // invite a second copy. A corrected result goes through analyzed and interpreted to a new letter.
             [KitAction.RecordResults] = KitState.Analyzed,
-            [KitAction.SendLetter] = KitState.LetterSent,
             [KitAction.Close] = KitState.Closed,
             [KitAction.Replace] = KitState.LetterSent,
         },

@@ -21,6 +21,13 @@ public static class RouteTable
         ["* /health/live"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health/live")),
         ["* /health/ready"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health/ready")),
 
+        // Areas: the coordinator (and admin) keep the list; the health department reads the codes its reports use.
+        ["GET /api/areas/"] = Allow([Roles.Coordinator, Roles.Admin, Roles.Health], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/areas")),
+        ["POST /api/areas/"] = Allow([Roles.Coordinator, Roles.Admin], HttpStatusCode.Created,
+            _ => Send(HttpMethod.Post, "/api/areas", new { code = $"area-{Guid.NewGuid():N}"[..20], name = "Salt Marsh" })),
+        ["PUT /api/areas/{code}"] = Allow([Roles.Coordinator, Roles.Admin], HttpStatusCode.OK,
+            _ => Send(HttpMethod.Put, "/api/areas/north", new { name = "North Shore" })),
+
         ["GET /api/households/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/households?search=Quennell")),
         ["POST /api/households/"] = Coordinator(HttpStatusCode.Created, _ => Send(HttpMethod.Post, "/api/households", Household())),
         ["GET /api/households/{id:guid}"] = Coordinator(HttpStatusCode.OK,

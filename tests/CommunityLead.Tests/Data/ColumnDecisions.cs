@@ -1,6 +1,7 @@
 using System.Security.Cryptography;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Areas;
 using CommunityLead.Api.Features.Attention;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Kits;
@@ -11,6 +12,7 @@ using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
 using CommunityLead.Rules.LabResults;
 using CommunityLead.Tests.Commands;
+using CommunityLead.Tests.Features.Areas;
 using CommunityLead.Tests.Features.Attention;
 using CommunityLead.Tests.Features.Households;
 using CommunityLead.Tests.Features.Interpretation;
@@ -41,6 +43,7 @@ internal sealed record Unlimited(string Column, string What) : ColumnDecision(Co
 internal static class ColumnDecisions
 {
     private const string HouseholdOver = nameof(HouseholdLengthTests.Household_SignUpOneCharacterOverAColumn_Is400SayingTheLimitAndWritesNothing);
+    private const string AreaOver = nameof(AreaTests.Area_TextOneCharacterOverItsColumn_400NamingItAndNothingAdded);
     private const string KitReasonOver = nameof(KitLengthTests.Kit_TextOneCharacterOverItsColumn_Is400SayingTheLimitAndLeavesTheKitAsItWas);
     private const string BatchHeaderOver = nameof(BatchLengthTests.JsonBatch_HeaderOneCharacterOverItsColumn_422SayingTheLimitAndNothingWritten);
     private const string BatchRowOver = nameof(BatchLengthTests.JsonBatch_RowTextNotInWhatTheColumnHolds_422NamingItAndNothingWritten);
@@ -59,9 +62,13 @@ internal static class ColumnDecisions
         new Validated("Household.ConsentVersion", 50, nameof(HouseholdValidator), HouseholdOver),
         new Validated("Household.AreaCode", 40, $"{nameof(HouseholdValidator)} (pattern of 1 to 40 characters)", HouseholdOver),
 
-        // Kits: reasons, taps and the codes the server makes.
+        // Areas: the coordinator's list.
+        new Validated("Area.Code", 40, $"{nameof(NewAreaValidator)} (pattern of 1 to 40 characters)", AreaOver),
+        new Validated("Area.Name", 100, nameof(NewAreaValidator), AreaOver),
+
+        // Kits: reasons, tap notes and the codes the server makes.
         new Validated("Kit.StateReason", 500, $"{nameof(ReasonValidator)}, {nameof(ReplacementValidator)} (else \"replaced by\" a code)", KitReasonOver),
-        new Validated("Sample.Tap", 60, nameof(SampleValidator), KitReasonOver),
+        new Validated("Sample.TapNote", 200, nameof(SampleValidator), KitReasonOver),
         new Bounded("Kit.Code", 16, "a new kit code", () => KitCode.NewCode().Length),
         new Bounded("Kit.ReplacesCode", 16, "a kit's code (the demo's parsed too)", () => MaxLength("Kit.Code")),
         new Bounded("Kit.ReplacedByCode", 16, "a kit's code", () => MaxLength("Kit.Code")),

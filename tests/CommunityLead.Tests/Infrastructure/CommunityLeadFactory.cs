@@ -5,6 +5,7 @@ using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Data.Sqlite;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.DependencyInjection.Extensions;
+using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 
 namespace CommunityLead.Tests.Infrastructure;
@@ -75,6 +76,28 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
             services.AddSingleton<TimeProvider>(Clock);
             extraServices?.Invoke(services);
         });
+    }
+
+    /// <summary>
+    /// Areas on the program's list before the test runs (households must name an active one): those the fixtures'
+    /// households use. A test of the list itself sets its own (none: <c>Areas = []</c>).
+    /// </summary>
+    public string[] Areas { get; init; } = ["riverside", "north", "harbour"];
+
+    protected override IHost CreateHost(IHostBuilder builder)
+    {
+        var host = base.CreateHost(builder);
+        // The service has migrated its database by now (Program.cs does so before it serves), unless a test of an
+        // unreachable or unmigrated store said not to.
+        if (!host.Services.GetRequiredService<Microsoft.Extensions.Options.IOptions<CommunityLead.Api.Infrastructure.DatabaseOptions>>().Value.MigrateOnStartup)
+            return host;
+        using var scope = host.Services.CreateScope();
+        var db = scope.ServiceProvider.GetRequiredService<CommunityLead.Api.Data.CommunityLeadDb>();
+        var known = db.Areas.Select(a => a.Code).ToHashSet();
+        foreach (var code in Areas.Where(c => !known.Contains(c)))
+            db.Areas.Add(new CommunityLead.Api.Data.Entities.Area { Code = code, Name = code });
+        db.SaveChanges();
+        return host;
     }
 
     public HttpClient CreateClient(string role)

@@ -27,10 +27,13 @@ public static class Fixtures
         return (await response.Content.ReadFromJsonAsync<JsonObject>())!["id"]!.GetValue<string>();
     }
 
+    public const string KitsHandedOut = "2026-03-01T09:00:00+00:00";
+
     public static async Task<string> IssueKitAsync(HttpClient coordinator, string? householdId = null, string kind = "water")
     {
         householdId ??= await SignUpAsync(coordinator);
-        var response = await coordinator.PostAsJsonAsync("/api/kits", new { householdId, kind });
+        // Handed out on 1 March: before every collection and receipt date the tests write (the clock reads 10 April).
+        var response = await coordinator.PostAsJsonAsync("/api/kits", new { householdId, kind, issuedAt = KitsHandedOut });
         await Expect(response, HttpStatusCode.Created);
         return (await response.Content.ReadFromJsonAsync<JsonObject>())!["code"]!.GetValue<string>();
     }

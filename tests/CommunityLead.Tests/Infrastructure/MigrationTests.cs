@@ -1,3 +1,4 @@
+using CommunityLead.Rules.Sampling;
 using CommunityLead.Api.Data;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Infrastructure;
@@ -98,6 +99,54 @@ public class MigrationUpgradeTests
                 db.Database.Migrate();
                 var items = db.Attention.OrderBy(a => a.Id).Select(a => new { a.Priority, a.InterpretationId }).ToList();
                 Assert.Equal([(0, (int?)2), (3, 2), (6, null)], items.Select(a => (a.Priority, a.InterpretationId)));
+            }
+        }
+        finally
+        {
+            Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+}
+
+public class LabViewMigrationTests
+{
+    [SqliteFact]
+    public void LabViewAndAreas_OnADatabaseWithFreeTextTapsAndAreaCodes_MapsKnownTapsNotesTheRestAndListsTheAreas()
+    {
+        var folder = Directory.CreateTempSubdirectory("cl-upgrade").FullName;
+        try
+        {
+            var options = new DbContextOptionsBuilder<CommunityLeadDb>().UseSqlite($"Data Source={Path.Combine(folder, "old.db")}").Options;
+            using (var db = new CommunityLeadDb(options))
+            {
+                db.GetService<IMigrator>().Migrate("AttentionItemInterpretation");
+                db.Database.OpenConnection();
+                db.Database.ExecuteSqlRaw("PRAGMA foreign_keys = OFF");
+                foreach (var (id, area) in new[] { ("a1", "harbour"), ("a2", "harbour"), ("a3", "old-mill") })
+                    db.Database.ExecuteSql($"""
+                        INSERT INTO "Households" ("Id", "Name", "Address_Line1", "Address_City", "Address_PostalCode", "Language", "ConsentVersion",
+                            "ConsentGivenAt", "AreaCode", "WaterSource", "ServiceLine", "ChildUnder6", "Pregnant", "FilterInUse", "CreatedAtUtc", "UpdatedAtUtc")
+                        VALUES ({id}, 'N', 'L', 'C', 'P', 'En', 'v', '2026-03-01T00:00:00+00:00', {area}, 'Public', 'Unknown', 0, 0, 0,
+                            '2026-03-01 00:00:00', '2026-03-01 00:00:00')
+                        """);
+                var taps = new[] { "Kitchen", " bathroom sink ", "Ottilie's bar, 555 0166", "", null };
+                for (var i = 0; i < taps.Length; i++)
+                    db.Database.ExecuteSql($"""
+                        INSERT INTO "Samples" ("CollectionId", "Index", "Bottle", "CollectedAt", "CollectedAtUtc", "Tap")
+                        VALUES (1, {i}, 'FirstDraw', '2026-04-03T06:00:00+00:00', '2026-04-03 06:00:00', {taps[i]})
+                        """);
+                db.Database.CloseConnection();
+            }
+            using (var db = new CommunityLeadDb(options))
+            {
+                db.Database.Migrate();
+                var samples = db.Samples.OrderBy(s => s.Index).Select(s => new { s.Tap, s.TapNote }).ToList();
+                Assert.Equal(
+                    [(SampleTap.Kitchen, null), (SampleTap.Bathroom, null), (SampleTap.Other, "Ottilie's bar, 555 0166"), (null, null), (null, null)],
+                    samples.Select(s => (s.Tap, s.TapNote)));
+                Assert.Equal([("harbour", true), ("old-mill", true)], db.Areas.OrderBy(a => a.Code).Select(a => new { a.Code, a.Active }).ToList()
+                    .Select(a => (a.Code, a.Active)));
             }
         }
         finally

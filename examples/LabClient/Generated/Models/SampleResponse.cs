@@ -25,12 +25,14 @@ namespace CommunityLead.LabClient.Api.Models
         /// <summary>The standingMinutes property</summary>
         public int? StandingMinutes { get; set; }
         /// <summary>The tap property</summary>
+        public global::CommunityLead.LabClient.Api.Models.SampleTap? Tap { get; set; }
+        /// <summary>The tapNote property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
 #nullable enable
-        public string? Tap { get; set; }
+        public string? TapNote { get; set; }
 #nullable restore
 #else
-        public string Tap { get; set; }
+        public string TapNote { get; set; }
 #endif
         /// <summary>The volumeMl property</summary>
         public int? VolumeMl { get; set; }
@@ -60,7 +62,8 @@ namespace CommunityLead.LabClient.Api.Models
                 { "location", n => { Location = n.GetEnumValue<global::CommunityLead.LabClient.Api.Models.SoilLocation>(); } },
                 { "position", n => { Position = n.GetIntValue(); } },
                 { "standingMinutes", n => { StandingMinutes = n.GetIntValue(); } },
-                { "tap", n => { Tap = n.GetStringValue(); } },
+                { "tap", n => { Tap = n.GetEnumValue<global::CommunityLead.LabClient.Api.Models.SampleTap>(); } },
+                { "tapNote", n => { TapNote = n.GetStringValue(); } },
                 { "volumeMl", n => { VolumeMl = n.GetIntValue(); } },
                 { "waterLastUsedAt", n => { WaterLastUsedAt = n.GetDateTimeOffsetValue(); } },
             };
@@ -78,7 +81,8 @@ namespace CommunityLead.LabClient.Api.Models
             writer.WriteEnumValue<global::CommunityLead.LabClient.Api.Models.SoilLocation>("location", Location);
             writer.WriteIntValue("position", Position);
             writer.WriteIntValue("standingMinutes", StandingMinutes);
-            writer.WriteStringValue("tap", Tap);
+            writer.WriteEnumValue<global::CommunityLead.LabClient.Api.Models.SampleTap>("tap", Tap);
+            writer.WriteStringValue("tapNote", TapNote);
             writer.WriteIntValue("volumeMl", VolumeMl);
             writer.WriteDateTimeOffsetValue("waterLastUsedAt", WaterLastUsedAt);
         }

@@ -8,7 +8,7 @@ public class SampleConfiguration : IEntityTypeConfiguration<Sample>
 {
     public void Configure(EntityTypeBuilder<Sample> b)
     {
-        b.Property(s => s.Tap).HasMaxLength(60);
+        b.Property(s => s.TapNote).HasMaxLength(200);
         b.HasIndex(s => s.CollectedAtUtc);
     }
 }

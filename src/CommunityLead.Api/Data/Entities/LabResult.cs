@@ -30,7 +30,8 @@ public class LabResult
     public double? Uncertainty { get; set; }
     public string? ReplicatesJson { get; set; }
     public DateTimeOffset? AcidifiedAt { get; set; }
-    public DateTimeOffset CollectedAt { get; set; }
+    /// <summary>Null while the kit's collection form has not been recorded (the results wait for it: WaitingResults).</summary>
+    public DateTimeOffset? CollectedAt { get; set; }
     /// <summary>Holding-time flags as JSON (code and message, as worded when the batch came in), or null.</summary>
     public string? HoldingFlags { get; set; }
     public DateTime? SupersededAtUtc { get; set; }

@@ -19,6 +19,8 @@ public class Sample
     public DateTime CollectedAtUtc { get; set; }
     public DateTimeOffset? WaterLastUsedAt { get; set; }
     public int? FlushSeconds { get; set; }
-    public string? Tap { get; set; }
+    public SampleTap? Tap { get; set; }
+    /// <summary>The coordinator's words about the tap. Free text: never shown to the lab.</summary>
+    public string? TapNote { get; set; }
     public int? StandingMinutes { get; set; }
 }

@@ -64,6 +64,25 @@ namespace CommunityLead.Api.Data.Migrations
                     b.ToTable("ApiKeys");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.Area", b =>
+                {
+                    b.Property<string>("Code")
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<bool>("Active")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Name")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Code");
+
+                    b.ToTable("Areas");
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.AttentionItem", b =>
                 {
                     b.Property<int>("Id")
@@ -714,7 +733,7 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
-                    b.Property<DateTimeOffset>("CollectedAt")
+                    b.Property<DateTimeOffset?>("CollectedAt")
                         .HasColumnType("TEXT");
 
                     b.Property<string>("HoldingFlags")
@@ -821,7 +840,11 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasColumnType("INTEGER");
 
                     b.Property<string>("Tap")
-                        .HasMaxLength(60)
+                        .HasMaxLength(40)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("TapNote")
+                        .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
                     b.Property<int?>("VolumeMl")

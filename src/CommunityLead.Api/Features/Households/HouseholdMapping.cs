@@ -27,7 +27,7 @@ public static class HouseholdMapping
         Set("language", h.Language, r.Language!.Value, v => h.Language = v);
         Set("consentVersion", h.ConsentVersion, r.ConsentVersion!.Trim(), v => h.ConsentVersion = v);
         Set("consentGivenAt", h.ConsentGivenAt, r.ConsentGivenAt!.Value, v => h.ConsentGivenAt = v);
-        Set("areaCode", h.AreaCode, r.AreaCode!.Trim().ToLowerInvariant(), v => h.AreaCode = v);
+        Set("areaCode", h.AreaCode, Areas.AreaCodes.Normal(r.AreaCode!), v => h.AreaCode = v);
         Set("waterSource", h.WaterSource, r.WaterSource!.Value, v => h.WaterSource = v);
         Set("yearBuilt", h.YearBuilt, r.YearBuilt, v => h.YearBuilt = v);
         Set("serviceLine", h.ServiceLine, r.ServiceLine!.Value, v => h.ServiceLine = v);

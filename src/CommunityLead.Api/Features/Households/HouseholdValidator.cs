@@ -1,4 +1,7 @@
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Features.Areas;
 using FluentValidation;
+using Microsoft.EntityFrameworkCore;
 
 namespace CommunityLead.Api.Features.Households;
 
@@ -7,11 +10,14 @@ public sealed class HouseholdValidator : AbstractValidator<HouseholdRequest>
     // At least seven digits, with the separators people actually type.
     private const string PhonePattern = @"^\+?[0-9][0-9 ().\-]{5,23}[0-9]$";
     private const string EmailPattern = @"^[^@\s]+@[^@\s]+\.[^@\s]+$";
-    private const string AreaCodePattern = "^[A-Za-z0-9][A-Za-z0-9-]{0,39}$";
     private static readonly DateTimeOffset Earliest = new(2000, 1, 1, 0, 0, 0, TimeSpan.Zero);
 
-    public HouseholdValidator(TimeProvider clock)
+    private readonly CommunityLeadDb db;
+    private readonly IHttpContextAccessor http;
+
+    public HouseholdValidator(TimeProvider clock, CommunityLeadDb db, IHttpContextAccessor http)
     {
+        (this.db, this.http) = (db, http);
         RuleFor(h => h.Name).NotEmpty().MaximumLength(200);
         RuleFor(h => h.Address).NotNull().SetValidator(new AddressValidator()!);
         // A blank phone or email means "none" (the mapping stores null), so only a non-blank one is checked.
@@ -24,8 +30,20 @@ public sealed class HouseholdValidator : AbstractValidator<HouseholdRequest>
         RuleFor(h => h.ConsentGivenAt).Cascade(CascadeMode.Stop).NotNull()
             .GreaterThanOrEqualTo(Earliest).WithMessage("Consent cannot be dated before 2000.")
             .Must(at => at <= clock.GetUtcNow().AddMinutes(15)).WithMessage("Consent cannot be dated in the future.");
-        RuleFor(h => h.AreaCode).NotEmpty().Matches(AreaCodePattern)
-            .WithMessage("Use 1 to 40 letters, digits or dashes, like 'harbour' or 'north-3'.");
+        RuleFor(h => h.AreaCode).Cascade(CascadeMode.Stop).NotEmpty().Matches(AreaCodes.Pattern).WithMessage(AreaCodes.Hint)
+            .CustomAsync(async (code, context, ct) =>
+            {
+                // A managed list, so a typo cannot split a report group; the answer names the codes to choose from.
+                var wanted = AreaCodes.Normal(code!);
+                var known = await db.Areas.AsNoTracking().OrderBy(a => a.Code).Select(a => new { a.Code, a.Active }).ToListAsync(ct);
+                if (known.Any(a => a.Code == wanted && a.Active)) return;
+                // A household edited after its area was deactivated keeps it; new homes cannot choose it.
+                if (known.Any(a => a.Code == wanted) && await EditedHouseholdHasAsync(wanted, ct)) return;
+                var active = known.Where(a => a.Active).Select(a => a.Code).ToList();
+                context.AddFailure(active.Count == 0
+                        ? "The program has no areas yet: add them first (POST /api/areas)."
+                        : $"'{code}' is not one of the program's areas. Use one of: {string.Join(", ", active)}.");
+            });
         RuleFor(h => h.WaterSource).NotNull();
         RuleFor(h => h.YearBuilt).Cascade(CascadeMode.Stop)
             .GreaterThanOrEqualTo(1700).WithMessage("A year built before 1700 is almost certainly a typo.")
@@ -35,6 +53,10 @@ public sealed class HouseholdValidator : AbstractValidator<HouseholdRequest>
         RuleFor(h => h.Pregnant).NotNull().WithMessage("Say whether anyone in the home is pregnant.");
         RuleFor(h => h.FilterInUse).NotNull();
     }
+
+    private async Task<bool> EditedHouseholdHasAsync(string area, CancellationToken ct) =>
+        http.HttpContext?.Request.RouteValues["id"] is string id && Guid.TryParse(id, out var household)
+        && await db.Households.AnyAsync(h => h.Id == household && h.AreaCode == area, ct);
 }
 
 public sealed class AddressValidator : AbstractValidator<AddressRequest>

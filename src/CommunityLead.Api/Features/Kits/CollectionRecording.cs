@@ -1,10 +1,13 @@
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Features.Interpretation;
+using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Kits;
 using CommunityLead.Rules.Sampling;
 using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.AspNetCore.Http.Json;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.Options;
 
@@ -18,13 +21,14 @@ public static class CollectionRecording
 {
     public static async Task<Results<Ok<KitResponse>, ValidationProblem, ProblemHttpResult>> Record(
         string code, CollectionRequest request, CommunityLeadDb db, TimeProvider clock, IOptions<SamplingLimits> limits,
-        HttpContext http, CancellationToken ct)
+        IOptions<LabIntakeOptions> intake, IOptions<JsonOptions> json, InterpretWithResults interpreting, HttpContext http, CancellationToken ct)
     {
         var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
         if (invalid is not null) return invalid;
         if (kit is null) return missing!;
         var samples = request.Samples!;
         if (WrongBottles(kit.Kind, samples) is { Count: > 0 } wrong) return Problems.Fields(wrong);
+        if (IssueDates.CollectedBeforeIssue(kit, samples) is { Count: > 0 } early) return Problems.Fields(early);
 
         var now = clock.GetUtcNow();
         var review = Review(kit.Kind, samples, now, limits.Value);
@@ -34,8 +38,22 @@ public static class CollectionRecording
 
         await SupersedeAsync(db, kit.Id, now.UtcDateTime, ct);
         kit.CollectedAtUtc = samples.Min(s => s.CollectedAt!.Value.UtcDateTime);
-        db.Collections.Add(NewCollection(kit.Id, samples, review, now.UtcDateTime, actor.Label));
-        return await KitMoves.SaveAndReadAsync(db, kit.Code, actor, ct);
+        var collection = NewCollection(kit.Id, samples, review, now.UtcDateTime, actor.Label);
+        db.Collections.Add(collection);
+        var waiting = await WaitingResults.MatchAsync(db, kit, collection.Samples, intake.Value.Holding, json.Value.SerializerOptions,
+            actor, now.UtcDateTime, ct);
+        if (waiting.Errors.Count > 0) return Problems.Fields(waiting.Errors);
+        if (!waiting.Completed) return await KitMoves.SaveAndReadAsync(db, kit.Code, actor, ct);
+        try
+        {
+            // The results that waited for this form are interpreted in the same transaction, as at lab intake.
+            await interpreting.SaveAsync([kit.Id], actor, now.UtcDateTime);
+        }
+        catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
+        {
+            return Problems.ChangedMeanwhile(kit.Code);
+        }
+        return TypedResults.Ok((await KitReader.ReadAsync(db, kit.Code, actor, ct))!);
     }
 
     /// <summary>A new recording supersedes the previous one; both stay in the database.</summary>
@@ -61,7 +79,8 @@ public static class CollectionRecording
         {
             Index = i, Bottle = s.Bottle!.Value, Position = s.Position, Location = s.Location, VolumeMl = s.VolumeMl,
             CollectedAt = s.CollectedAt!.Value, CollectedAtUtc = s.CollectedAt.Value.UtcDateTime,
-            WaterLastUsedAt = s.WaterLastUsedAt, FlushSeconds = s.FlushSeconds, Tap = s.Tap?.Trim(),
+            WaterLastUsedAt = s.WaterLastUsedAt, FlushSeconds = s.FlushSeconds, Tap = s.Tap,
+            TapNote = string.IsNullOrWhiteSpace(s.TapNote) ? null : s.TapNote.Trim(),
             StandingMinutes = review.StandingTimes[i] is { } t ? (int)Math.Round(t.TotalMinutes) : null,
         })],
         Flags = [.. review.Flags.Select(f => new KitFlag

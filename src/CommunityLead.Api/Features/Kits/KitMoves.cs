@@ -16,7 +16,9 @@ public static class KitMoves
     {
         if (!await db.Households.AnyAsync(h => h.Id == request.HouseholdId, ct))
             return Problems.Field("householdId", "No household has this id. Sign the household up first.");
-        var kit = await NewKitAsync(db, request.HouseholdId!.Value, request.Kind!.Value, clock.GetUtcNow().UtcDateTime, Actor.From(http.User), null, ct);
+        var now = clock.GetUtcNow().UtcDateTime;
+        var kit = await NewKitAsync(db, request.HouseholdId!.Value, request.Kind!.Value, now, Actor.From(http.User), null, ct);
+        if (request.IssuedAt is { } handedOut) kit.IssuedAtUtc = handedOut.UtcDateTime;
         await db.SaveChangesAsync(ct);
         return TypedResults.Created($"/api/kits/{kit.Code}", new KitIssued(kit.Code, kit.State, kit.HouseholdId));
     }
@@ -43,6 +45,7 @@ public static class KitMoves
         var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
         if (invalid is not null) return invalid;
         if (kit is null) return missing!;
+        if (IssueDates.ReceivedBeforeIssue(kit, request.ReceivedAt!.Value) is { } early) return early;
         var actor = Actor.From(http.User);
         if (KitTransitions.Apply(db, kit, KitAction.Receive, actor, clock.GetUtcNow().UtcDateTime, detail: request.Note) is { } illegal)
             return illegal;

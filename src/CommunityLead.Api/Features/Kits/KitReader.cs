@@ -42,9 +42,9 @@ public static class KitReader
 
         return new KitResponse(
             kit.Code, kit.Kind, kit.State, isCoordinator ? kit.HouseholdId : null, kit.IssuedAtUtc, kit.ReceivedAt,
-            isCoordinator ? kit.StateReason : null, kit.ReplacesCode, kit.ReplacedByCode,
+            isCoordinator ? kit.StateReason : null, isCoordinator ? kit.ReplacesCode : null, isCoordinator ? kit.ReplacedByCode : null,
             samples.Select(s => new SampleResponse(s.Bottle, s.Position, s.Location, s.VolumeMl, s.CollectedAt,
-                s.WaterLastUsedAt, s.FlushSeconds, s.Tap, s.StandingMinutes)).ToList(),
+                s.WaterLastUsedAt, s.FlushSeconds, s.Tap, s.StandingMinutes, isCoordinator ? s.TapNote : null)).ToList(),
             flags, KitLifecycle.AllowedActions(kit.State), history);
     }
 }

@@ -3,7 +3,9 @@ using CommunityLead.Rules.Sampling;
 
 namespace CommunityLead.Api.Features.Kits;
 
-public sealed record IssueKitRequest(Guid? HouseholdId, KitKind? Kind);
+/// <param name="IssuedAt">When the kit was handed out, if before it is entered here (kits given out at an event are often
+/// typed in days later); now when left out. Collections and receipts dated before it are refused.</param>
+public sealed record IssueKitRequest(Guid? HouseholdId, KitKind? Kind, DateTimeOffset? IssuedAt = null);
 
 public sealed record CollectionRequest(IReadOnlyList<SampleRequest>? Samples);
 
@@ -15,7 +17,8 @@ public sealed record SampleRequest(
     DateTimeOffset? CollectedAt,
     DateTimeOffset? WaterLastUsedAt,
     int? FlushSeconds,
-    string? Tap);
+    SampleTap? Tap,
+    string? TapNote = null);
 
 public sealed record ReceiptRequest(DateTimeOffset? ReceivedAt, string? Note);
 

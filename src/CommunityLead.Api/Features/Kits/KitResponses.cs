@@ -7,8 +7,9 @@ namespace CommunityLead.Api.Features.Kits;
 public sealed record KitIssued(string Code, KitState State, Guid HouseholdId);
 
 /// <summary>
-/// One kit. The lab gets the same shape without <see cref="HouseholdId"/> and <see cref="History"/>
-/// (history reasons are free text and may name people), so those are left out when null.
+/// One kit. The lab gets the same shape without <see cref="HouseholdId"/>, <see cref="History"/> (history reasons
+/// are free text and may name people), the replacement links (they tie a household's kits together) and the tap
+/// notes, so those are left out when null.
 /// </summary>
 public sealed record KitResponse(
     string Code,
@@ -18,8 +19,8 @@ public sealed record KitResponse(
     DateTime IssuedAt,
     DateTimeOffset? ReceivedAt,
     string? StateReason,
-    string? ReplacesCode,
-    string? ReplacedByCode,
+    [property: JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] string? ReplacesCode,
+    [property: JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] string? ReplacedByCode,
     IReadOnlyList<SampleResponse> Samples,
     IReadOnlyList<FlagResponse> Flags,
     IReadOnlyList<KitAction> AllowedActions,
@@ -33,8 +34,9 @@ public sealed record SampleResponse(
     DateTimeOffset CollectedAt,
     DateTimeOffset? WaterLastUsedAt,
     int? FlushSeconds,
-    string? Tap,
-    int? StandingMinutes);
+    SampleTap? Tap,
+    int? StandingMinutes,
+    [property: JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] string? TapNote = null);
 
 public sealed record FlagResponse(
     CollectionFlagCode Code, FlagSeverity Severity, BottleType? Bottle, int? Position, string Message);

@@ -15,10 +15,12 @@ internal static class SaneTimes
 
 public sealed class IssueKitValidator : AbstractValidator<IssueKitRequest>
 {
-    public IssueKitValidator()
+    public IssueKitValidator(TimeProvider clock)
     {
         RuleFor(r => r.HouseholdId).NotNull().NotEqual(Guid.Empty);
         RuleFor(r => r.Kind).NotNull();
+        RuleFor(r => r.IssuedAt).InSaneRange(clock)
+            .Must(t => t is null || t <= clock.GetUtcNow().AddMinutes(15)).WithMessage("A kit cannot be issued in the future.");
     }
 }
 
@@ -57,7 +59,7 @@ public sealed class SampleValidator : AbstractValidator<SampleRequest>
         RuleFor(s => s.FlushSeconds).InclusiveBetween(0, 3600);
         RuleFor(s => s.FlushSeconds).Null().When(s => s.Bottle is not null && s.Bottle != BottleType.Flushed)
             .WithMessage("Only flushed bottles have a flush time.");
-        RuleFor(s => s.Tap).MaximumLength(60);
+        RuleFor(s => s.TapNote).MaximumLength(200);
     }
 }
 

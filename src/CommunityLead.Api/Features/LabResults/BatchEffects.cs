@@ -73,6 +73,12 @@ public static class BatchEffects
                         "the kit stays closed: call the household, and issue a replacement kit if a new test is needed.", nowUtc));
                 continue;
             }
+            if (!bottles[kit.Id].Any())
+            {
+                // No collection form yet: the results wait for it (WaitingResults), and a person is told.
+                await WaitingResults.RaiseAsync(db, kit, batch, results, nowUtc, ct);
+                continue;
+            }
             var lead = covered[kit.Id].ToHashSet();
             if (!changedKits.Contains(kit.Id) || !bottles[kit.Id].All(lead.Contains)) continue;
             var letterWentOut = kit.State == KitState.LetterSent;

@@ -105,7 +105,7 @@ public static class BatchIntake
         BatchIntakeContext intake)
     {
         if (latest.InEffect) await intake.Repair.RepairAsync(new RepairScope(BatchKey: latest.Id), CancellationToken.None);
-        return TypedResults.Ok(await BatchViews.OutcomeAsync(intake.Db, latest, intake.JsonOptions, CancellationToken.None));
+        return TypedResults.Ok(await BatchViews.OutcomeAsync(intake.Db, latest, intake.JsonOptions, forCoordinator: false, CancellationToken.None));
     }
 
     /// <summary>A checked batch that is no repeat: a new batch, or a new version of one (a correction), in one transaction.</summary>
@@ -137,7 +137,7 @@ public static class BatchIntake
             return BatchProblems.Raced(batch.BatchId);
         }
         return TypedResults.Created($"/api/lab/batches/{Uri.EscapeDataString(entity.BatchId)}",
-            await BatchViews.OutcomeAsync(db, entity, intake.JsonOptions, ct));
+            await BatchViews.OutcomeAsync(db, entity, intake.JsonOptions, forCoordinator: false, ct));
     }
 
     /// <summary>Hash of what the lab reported, without the correction note, so a repeated correction is recognised too.</summary>

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Infrastructure;
@@ -13,7 +14,7 @@ public static class BatchQueries
 {
     /// <summary>The latest version with its verdict and results, and every earlier version's summary.</summary>
     public static async Task<Results<Ok<BatchDetail>, ProblemHttpResult>> Get(
-        string batchId, CommunityLeadDb db, IOptions<JsonOptions> json, CancellationToken ct)
+        string batchId, CommunityLeadDb db, IOptions<JsonOptions> json, HttpContext http, CancellationToken ct)
     {
         var versions = await db.LabBatches.AsNoTracking().Where(b => b.BatchId == batchId).OrderBy(b => b.Version).ToListAsync(ct);
         if (versions.Count == 0)
@@ -22,7 +23,7 @@ public static class BatchQueries
         var options = json.Value.SerializerOptions;
         var results = await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == latest.Id).OrderBy(r => r.Id).ToListAsync(ct);
         return TypedResults.Ok(new BatchDetail(
-            await BatchViews.OutcomeAsync(db, latest, options, ct),
+            await BatchViews.OutcomeAsync(db, latest, options, Actor.From(http.User).Is(Roles.Coordinator), ct),
             [.. versions.Select(v => new BatchVersion(v.Version, v.Status, v.PostedAtUtc, v.PostedBy, v.CorrectionReason, v.ContentHash))],
             [.. results.Select(r => new ResultView(r.KitCode, r.Bottle, r.Position, r.Location, r.Analyte, r.Value, r.Unit,
                 r.OriginalValue, r.OriginalUnit, r.Qualifier, r.Mdl, r.ReportingLimit, r.Uncertainty,

@@ -51,7 +51,7 @@ public static class BatchReleasing
         {
             return BatchProblems.Raced(batchId, "Read the batch again: it may already be released.");
         }
-        return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, ct));
+        return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, forCoordinator: true, ct));
     }
 }
 

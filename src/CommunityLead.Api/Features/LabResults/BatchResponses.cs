@@ -19,7 +19,9 @@ public sealed record BatchOutcome(
     string PostedBy,
     BatchRelease? Release);
 
-public sealed record BatchRelease(DateTime At, string By, string Reason);
+/// <param name="Reason">The coordinator's reason; left out of the lab's views.</param>
+public sealed record BatchRelease(DateTime At, string By,
+    [property: System.Text.Json.Serialization.JsonIgnore(Condition = System.Text.Json.Serialization.JsonIgnoreCondition.WhenWritingNull)] string? Reason);
 
 /// <summary>A result kept but flagged, e.g. analyzed outside its holding time.</summary>
 public sealed record ResultFlag(string KitCode, BottleType Bottle, int? Position, SoilLocation? Location, Analyte Analyte, string Code, string Message);

@@ -11,7 +11,10 @@ namespace CommunityLead.Api.Features.LabResults;
 /// <summary>Reads stored batches back as the lab and the coordinator see them.</summary>
 public static class BatchViews
 {
-    public static async Task<BatchOutcome> OutcomeAsync(CommunityLeadDb db, LabBatch batch, JsonSerializerOptions json, CancellationToken ct)
+    /// <param name="forCoordinator">Whether the release reason is shown: the coordinator's own words, which may
+    /// mention a household, so the lab sees only that and when the batch was released.</param>
+    public static async Task<BatchOutcome> OutcomeAsync(CommunityLeadDb db, LabBatch batch, JsonSerializerOptions json, bool forCoordinator,
+        CancellationToken ct)
     {
         var flagged = await db.LabResults.AsNoTracking()
             .Where(r => r.LabBatchId == batch.Id && r.HoldingFlags != null)
@@ -30,7 +33,7 @@ public static class BatchViews
             $"Kit {r.KitCode} is {KebabEnum.Name(r.State)}: this result is kept on record but changes nothing for the kit.")));
         return new BatchOutcome(batch.BatchId, batch.Version, batch.Status, batch.Method, batch.AnalyzedAt, batch.ResultCount,
             JsonSerializer.Deserialize<QcVerdict>(batch.QcJson, json)!, flags, batch.CorrectionReason, batch.PostedAtUtc,
-            batch.PostedBy, batch.ReleasedAtUtc is { } at ? new BatchRelease(at, batch.ReleasedBy!, batch.ReleaseReason!) : null);
+            batch.PostedBy, batch.ReleasedAtUtc is { } at ? new BatchRelease(at, batch.ReleasedBy!, forCoordinator ? batch.ReleaseReason : null) : null);
     }
 
     public static IReadOnlyList<HoldingFlag> Holding(string? stored, JsonSerializerOptions json) =>

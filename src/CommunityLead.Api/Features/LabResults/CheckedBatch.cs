@@ -3,7 +3,10 @@ using CommunityLead.Rules.Sampling;
 
 namespace CommunityLead.Api.Features.LabResults;
 
-/// <summary>A result that passed every check, normalised to the unit results are stored in.</summary>
+/// <summary>
+/// A result that passed every check, normalised to the unit results are stored in. <see cref="CollectedAt"/> is null
+/// for a kit whose collection form is not recorded yet: the result waits for it (WaitingResults).
+/// </summary>
 public sealed record CheckedResult(
     ResultRow Row,
     int KitId,
@@ -19,7 +22,7 @@ public sealed record CheckedResult(
     double? Uncertainty,
     IReadOnlyList<double>? Replicates,
     DateTimeOffset? AcidifiedAt,
-    DateTimeOffset CollectedAt,
+    DateTimeOffset? CollectedAt,
     IReadOnlyList<HoldingFlag> Holding);
 
 public sealed record CheckedQc(QcSample Sample, string Unit);

@@ -36,7 +36,17 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         }
         else if (bottle == BottleType.Soil)
             Problem("location", $"Which soil sample? {KebabEnum.Allowed<SoilLocation>()}.");
-        if (problems.Count == before)
+        // The lab may receive a kit whose form the coordinator has not typed in yet. Its results are kept and wait
+        // for the form (WaitingResults), so only what the kit itself decides can be checked now.
+        var waiting = !kitSamples.Any();
+        if (problems.Count == before && waiting)
+        {
+            if (!Bottles.FitsKit(kit.Kind, bottle))
+                Problem("bottle", $"A {KebabEnum.Name(kit.Kind)} kit has no {KebabEnum.Name(bottle)} bottle.");
+            else if ((bottle == BottleType.Sequential) != (row.Position is not null) || row.Position is < 1 or > 30)
+                Problem("position", "Sequential bottles, and only they, have a position from 1 to 30.");
+        }
+        else if (problems.Count == before)
         {
             sample = kitSamples.FirstOrDefault(s => s.Bottle == bottle && s.Position == row.Position && (location is null || s.Location == location));
             if (sample is null && row.Unreadable?.Contains("position") != true)
@@ -65,13 +75,13 @@ internal sealed class ResultRowCheck(DateTimeOffset? analyzedAt, HoldingLimits h
         if (analyzedAt is { } analyzed && sample is not null && analyzed < sample.CollectedAt)
             Problem("analyzedAt", $"The batch's analysis time is before kit {kit.Code}'s sample was collected.");
         // Without a valid analysis time (reported once, for the batch) holding times cannot be judged.
-        if (problems.Count > before || incomplete || sample is null || analyzedAt is null) return null;
+        if (problems.Count > before || incomplete || (sample is null && !waiting) || analyzedAt is null) return null;
 
         var unit = Analytes.NormalUnit(analyte, matrix);
-        return new CheckedResult(row, kit.Id, kit.Code, bottle, sample.Location, matrix, analyte,
+        return new CheckedResult(row, kit.Id, kit.Code, bottle, sample?.Location ?? location, matrix, analyte,
             row.Value!.Value * factor, unit, row.Mdl!.Value * factor, row.ReportingLimit!.Value * factor,
-            row.Uncertainty * factor, row.Replicates?.Select(v => v * factor).ToList(), acidifiedAt, sample.CollectedAt,
-            HoldingTimes.Check(sample.CollectedAt, analyzedAt!.Value, acidifiedAt, holding));
+            row.Uncertainty * factor, row.Replicates?.Select(v => v * factor).ToList(), acidifiedAt, sample?.CollectedAt,
+            sample is null ? [] : HoldingTimes.Check(sample.CollectedAt, analyzedAt!.Value, acidifiedAt, holding));
     }
 
     private static void CheckNumbers(ResultRow row, Action<string, string> problem, Action<string, string> missing)

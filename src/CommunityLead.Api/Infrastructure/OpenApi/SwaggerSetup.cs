@@ -29,6 +29,7 @@ public static class SwaggerSetup
     /// <summary>What each tag covers, for a lab's developer reading the document cold.</summary>
     private static readonly (string Name, string Description)[] Tags =
     [
+        ("Areas", "The areas the coordinator keeps, which households belong to and reports group by"),
         ("Households", "Homes signed up to the program, with consent, language and what matters for the advice"),
         ("Kits", "Each kit from issue to closing: collection, receipt at the lab, replacement"),
         ("Lab results", "Batches of results and QC from the partner lab, their verdict and release"),

@@ -131,7 +131,9 @@ public class HouseholdValidationTests
     }
 
     [Theory]
-    [InlineData("{\"name\":\"Marisol Quennell\",\"address\":{\"line1\":", "address.line1")]
+    // A body cut short is read whole before its fields are (HouseholdRequest is read field by field), so the
+    // answer names the body, not the field it broke off in.
+    [InlineData("{\"name\":\"Marisol Quennell\",\"address\":{\"line1\":", "body")]
     [InlineData("{\"name\":\"Marisol Quennell\",", "body")]
     [InlineData("", "body")]
     [InlineData("[]", "body")]

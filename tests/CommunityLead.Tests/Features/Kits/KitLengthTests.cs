@@ -9,7 +9,7 @@ using static CommunityLead.Tests.Infrastructure.Fixtures;
 namespace CommunityLead.Tests.Features.Kits;
 
 /// <summary>
-/// Reasons, notes and taps against their columns: one character more is refused by name, with the limit, and the
+/// Reasons, notes and tap notes against their columns: one character more is refused by name, with the limit, and the
 /// kit stays as it was; at the limit the text is stored whole (PostgreSQL would refuse a longer one with a 500).
 /// </summary>
 public class KitLengthTests
@@ -27,8 +27,8 @@ public class KitLengthTests
         { "reject", """{"reason":{0}}""", "reason", Reason },
         { "replacement", """{"reason":{0}}""", "reason", Reason },
         { "receipt", """{"receivedAt":"2026-04-04T11:00:00+00:00","note":{0}}""", "note", Note },
-        { "collection", """{"samples":[{"bottle":"first-draw","volumeMl":1000,"collectedAt":"2026-04-03T06:00:00+00:00","tap":{0}}]}""",
-            "samples[0].tap", StoreModel.MaxLength("Sample.Tap") },
+        { "collection", """{"samples":[{"bottle":"first-draw","volumeMl":1000,"collectedAt":"2026-04-03T06:00:00+00:00","tap":"other","tapNote":{0}}]}""",
+            "samples[0].tapNote", StoreModel.MaxLength("Sample.TapNote") },
     };
 
     [Theory]
@@ -57,16 +57,16 @@ public class KitLengthTests
         var coordinator = app.CreateClient(Roles.Coordinator);
         var reason = new string('r', Reason);
         var note = new string('n', Note);
-        var tap = new string('t', StoreModel.MaxLength("Sample.Tap"));
+        var tapNote = new string('t', StoreModel.MaxLength("Sample.TapNote"));
         var code = await IssueKitAsync(coordinator);
         var collection = Json(GoodWaterCollection());
-        With(collection, "samples[0].tap", JsonSerializer.Serialize(tap));
+        With(collection, "samples[0].tapNote", JsonSerializer.Serialize(tapNote));
 
         await PostAsync(coordinator, $"/api/kits/{code}/collection", collection, HttpStatusCode.OK);
         await PostAsync(coordinator, $"/api/kits/{code}/receipt", new { receivedAt = "2026-04-04T11:00:00+00:00", note }, HttpStatusCode.OK);
         var rejected = await PostAsync(coordinator, $"/api/kits/{code}/reject", new { reason }, HttpStatusCode.OK);
 
-        Assert.Equal(tap, rejected["samples"]![0]!["tap"]!.GetValue<string>());
+        Assert.Equal(tapNote, rejected["samples"]![0]!["tapNote"]!.GetValue<string>());
         Assert.Equal(reason, app.WithDb(db => db.Kits.Single(k => k.Code == code).StateReason));
         Assert.Equal(note, app.WithDb(db => db.AuditTrail.Single(a => a.Action == "receive").Detail));
     }

@@ -15,6 +15,25 @@ public class LetterConfirmationTests
     }
 
     [Fact]
+    public async Task LetterSent_AfterConfirming_AllowedActionsNoLongerOfferSendLetter()
+    {
+        using var app = new CommunityLeadFactory();
+        var flow = new ResultsFlow(app);
+        var code = await flow.ReceivedKitAsync();
+        await flow.PostLeadAsync(code, firstDraw: 2, flushed: 1);
+        static string[] Allowed(System.Text.Json.Nodes.JsonObject kit) =>
+            [.. kit["allowedActions"]!.AsArray().Select(a => a!.GetValue<string>())];
+        Assert.Contains("send-letter", Allowed(await GetAsync(flow.Coordinator, $"/api/kits/{code}")));
+
+        await PostAsync(flow.Coordinator, $"/api/kits/{code}/letter/sent", new { letterId = await RenderAsync(flow.Coordinator, code) }, HttpStatusCode.OK);
+
+        var sent = await GetAsync(flow.Coordinator, $"/api/kits/{code}");
+        Assert.Equal("letter-sent", sent["state"]!.GetValue<string>());
+        Assert.DoesNotContain("send-letter", Allowed(sent));
+        Assert.Contains("close", Allowed(sent));
+    }
+
+    [Fact]
     public async Task LetterSent_ConfirmedTwice_SecondIs409AndFirstDateKept()
     {
         using var app = new CommunityLeadFactory();

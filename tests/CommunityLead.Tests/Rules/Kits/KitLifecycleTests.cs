@@ -30,7 +30,6 @@ public class KitLifecycleTests
         (KitState.Interpreted, KitAction.Interpret, KitState.Interpreted),
         (KitState.Interpreted, KitAction.SendLetter, KitState.LetterSent),
         (KitState.Interpreted, KitAction.Replace, KitState.Interpreted),
-        (KitState.LetterSent, KitAction.SendLetter, KitState.LetterSent),
         (KitState.LetterSent, KitAction.RecordResults, KitState.Analyzed),
         (KitState.LetterSent, KitAction.Close, KitState.Closed),
         (KitState.LetterSent, KitAction.Replace, KitState.LetterSent),
@@ -89,6 +88,7 @@ public class KitLifecycleTests
     [InlineData(KitState.Received, KitAction.Cancel)]
     [InlineData(KitState.Received, KitAction.Interpret)]
     [InlineData(KitState.Analyzed, KitAction.SendLetter)]
+    [InlineData(KitState.LetterSent, KitAction.SendLetter)]
     [InlineData(KitState.LetterSent, KitAction.Interpret)]
     [InlineData(KitState.Closed, KitAction.Receive)]
     [InlineData(KitState.Cancelled, KitAction.RecordCollection)]

@@ -71,6 +71,25 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                     b.ToTable("ApiKeys");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.Area", b =>
+                {
+                    b.Property<string>("Code")
+                        .HasMaxLength(40)
+                        .HasColumnType("character varying(40)");
+
+                    b.Property<bool>("Active")
+                        .HasColumnType("boolean");
+
+                    b.Property<string>("Name")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("character varying(100)");
+
+                    b.HasKey("Code");
+
+                    b.ToTable("Areas");
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.AttentionItem", b =>
                 {
                     b.Property<int>("Id")
@@ -748,7 +767,6 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasColumnType("character varying(40)");
 
                     b.Property<string>("CollectedAt")
-                        .IsRequired()
                         .HasMaxLength(40)
                         .HasColumnType("character varying(40)");
 
@@ -860,8 +878,12 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasColumnType("integer");
 
                     b.Property<string>("Tap")
-                        .HasMaxLength(60)
-                        .HasColumnType("character varying(60)");
+                        .HasMaxLength(40)
+                        .HasColumnType("character varying(40)");
+
+                    b.Property<string>("TapNote")
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
 
                     b.Property<int?>("VolumeMl")
                         .HasColumnType("integer");
