@@ -50,6 +50,8 @@ public static class CsvBatchReader
         var index = MapColumns(csv.Headers, problems);
         while (await csv.ReadAsync(ct))
         {
+            // A spreadsheet saves an emptied row as its delimiters alone (";;;;"): a blank row, not a result without a kit code.
+            if (BlankRow(csv)) continue;
             var cells = new CsvCells(csv, index, $"row {csv.LineNumber}", problems);
             var sampleType = cells.Text("sampleType");
             if (sampleType is null || sampleType.Equals("sample", StringComparison.OrdinalIgnoreCase))
@@ -92,6 +94,13 @@ public static class CsvBatchReader
             problems.Add(new("", "correction", "Use correction=true or correction=false."));
         return new BatchRequest(Blank(query["batchId"]), Blank(query["method"]), Blank(query["analyzedAt"]), correction,
             Blank(query["correctionReason"]), [], []);
+    }
+
+    private static bool BlankRow(CsvReader csv)
+    {
+        for (var i = 0; i < csv.FieldCount; i++)
+            if (!string.IsNullOrWhiteSpace(csv.GetString(i))) return false;
+        return true;
     }
 
     private static string? Blank(string? s) => string.IsNullOrWhiteSpace(s) ? null : s.Trim();

@@ -31,9 +31,14 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     {
         if (Text(column) is not { } text) return null;
         if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && double.IsFinite(value)) return value;
-        Unreadable(column, text.Contains(',')
-            ? $"'{text}' is not a number; use a decimal point (12.4), not a comma."
-            : $"'{text}' is not a number.");
+        Unreadable(column, text switch
+        {
+            // "<1.0" is how a report writes "below the reporting limit of 1.0": the comparison has its own column.
+            ['<' or '>', .. var rest] when double.TryParse(rest.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out _) =>
+                $"'{text}' is not a number: write the sign in the qualifier column and the number here (qualifier '{text[0]}', {column} {rest.Trim()}).",
+            _ when text.Contains(',') => $"'{text}' is not a number; use a decimal point (12.4), not a comma.",
+            _ => $"'{text}' is not a number.",
+        });
         return null;
     }
 

@@ -75,6 +75,40 @@ public class CsvRefusalTests
     }
 }
 
+/// <summary>Two things a spreadsheet does to a lab's file, answered in the lab's terms.</summary>
+public class CsvSpreadsheetHabitTests
+{
+    [Fact]
+    public async Task Csv_ValueWrittenAsLessThanOne_PointsToTheQualifierColumn()
+    {
+        using var app = new CommunityLeadFactory();
+        var lab = app.CreateClient(Roles.Lab);
+        var kit = await ReceivedKitAsync(app.CreateClient(Roles.Coordinator), lab);
+        var csv = $"kitCode,bottle,analyte,value,unit,mdl,reportingLimit\n{kit},first-draw,lead,<1.0,ug/L,0.3,1.0\n{kit},flushed,lead,1.0,ug/L,0.3,1.0\n";
+
+        var refused = await ReadAsync(await PostCsvAsync(lab, Query("CSV-LT-1"), csv), HttpStatusCode.UnprocessableEntity);
+
+        var reason = Assert.Single(refused["errors"]!["row 2/value"]!.AsArray())!.GetValue<string>();
+        Assert.Contains("qualifier column", reason, StringComparison.Ordinal);
+        Assert.Contains("qualifier '<', value 1.0", reason, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Csv_RowOfDelimitersOnly_IsABlankRowNotAMissingKitCode()
+    {
+        using var app = new CommunityLeadFactory();
+        var lab = app.CreateClient(Roles.Lab);
+        var kit = await ReceivedKitAsync(app.CreateClient(Roles.Coordinator), lab);
+        var csv = $"kitCode;bottle;analyte;value;unit;mdl;reportingLimit\n{kit};first-draw;lead;2.0;ug/L;0.3;1.0\n;;;;;;\n" +
+                  $"{kit};flushed;lead;1.0;ug/L;0.3;1.0\n;;;;;;\n";
+
+        var response = await PostCsvAsync(lab, Query("CSV-BLANK-1"), csv);
+
+        Assert.True(response.StatusCode == HttpStatusCode.Created, await response.Content.ReadAsStringAsync());
+        Assert.Equal(2, app.WithDb(db => db.LabResults.Count(r => r.KitCode == kit)));
+    }
+}
+
 public class CsvStrayQuoteTests
 {
     [Fact]
