@@ -736,7 +736,7 @@ namespace CommunityLead.Api.Data.Migrations
                         .HasMaxLength(40)
                         .HasColumnType("TEXT");
 
-                    b.Property<DateTimeOffset?>("CollectedAt")
+                    b.Property<DateTimeOffset>("CollectedAt")
                         .HasColumnType("TEXT");
 
                     b.Property<string>("HoldingFlags")

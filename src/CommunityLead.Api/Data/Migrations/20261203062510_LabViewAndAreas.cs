@@ -20,14 +20,6 @@ namespace CommunityLead.Api.Data.Migrations
 
             foreach (var sql in LabViewData.TapsUp) migrationBuilder.Sql(sql);
 
-            migrationBuilder.AlterColumn<DateTimeOffset>(
-                name: "CollectedAt",
-                table: "LabResults",
-                type: "TEXT",
-                nullable: true,
-                oldClrType: typeof(DateTimeOffset),
-                oldType: "TEXT");
-
             migrationBuilder.CreateTable(
                 name: "Areas",
                 columns: table => new
@@ -55,16 +47,6 @@ namespace CommunityLead.Api.Data.Migrations
             migrationBuilder.DropColumn(
                 name: "TapNote",
                 table: "Samples");
-
-            migrationBuilder.AlterColumn<DateTimeOffset>(
-                name: "CollectedAt",
-                table: "LabResults",
-                type: "TEXT",
-                nullable: false,
-                defaultValue: new DateTimeOffset(new DateTime(1, 1, 1, 0, 0, 0, 0, DateTimeKind.Unspecified), new TimeSpan(0, 0, 0, 0, 0)),
-                oldClrType: typeof(DateTimeOffset),
-                oldType: "TEXT",
-                oldNullable: true);
         }
     }
 }

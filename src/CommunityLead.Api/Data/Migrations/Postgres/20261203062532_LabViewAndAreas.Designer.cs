@@ -770,6 +770,7 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasColumnType("character varying(40)");
 
                     b.Property<string>("CollectedAt")
+                        .IsRequired()
                         .HasMaxLength(40)
                         .HasColumnType("character varying(40)");
 

@@ -30,16 +30,6 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                 oldMaxLength: 60,
                 oldNullable: true);
 
-            migrationBuilder.AlterColumn<string>(
-                name: "CollectedAt",
-                table: "LabResults",
-                type: "character varying(40)",
-                maxLength: 40,
-                nullable: true,
-                oldClrType: typeof(string),
-                oldType: "character varying(40)",
-                oldMaxLength: 40);
-
             migrationBuilder.CreateTable(
                 name: "Areas",
                 columns: table => new
@@ -74,18 +64,6 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                 type: "character varying(60)",
                 maxLength: 60,
                 nullable: true,
-                oldClrType: typeof(string),
-                oldType: "character varying(40)",
-                oldMaxLength: 40,
-                oldNullable: true);
-
-            migrationBuilder.AlterColumn<string>(
-                name: "CollectedAt",
-                table: "LabResults",
-                type: "character varying(40)",
-                maxLength: 40,
-                nullable: false,
-                defaultValue: "",
                 oldClrType: typeof(string),
                 oldType: "character varying(40)",
                 oldMaxLength: 40,
