@@ -65,10 +65,17 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         // passed, so that a bad soil row does not also make the soil QC look like water QC with the wrong unit.
         var matrix = rowKits.Count > 0 && rowKits.All(k => k.Kind == KitKind.Soil) ? Matrix.Soil : Matrix.Water;
         var qc = new QcRowCheck(problems, unreadable).CheckAll(request.Qc ?? [], matrix);
+        // The optional run blocks (calibration, XRF references and repeats): RunBlockCheck.
+        var runCheck = new RunBlockCheck(problems);
+        runCheck.CheckRows(rows, request.Qc ?? []);
+        var (calibrations, references, repeats) = runCheck.Check(request.Run, matrix);
 
         if (problems.Count > 0) return (null, problems);
         return (new CheckedBatch(request.BatchId!, request.Method!, analyzedAt!.Value, request.Correction == true,
-            request.CorrectionReason, results, qc), problems);
+            request.CorrectionReason, results, qc)
+        {
+            Run = RunAssembly.Assemble(results, request.Qc ?? [], qc, calibrations, references, repeats),
+        }, problems);
     }
 
     internal static DateTimeOffset? Time(string? text) =>

@@ -13,7 +13,11 @@ public sealed record BatchRequest(
     bool? Correction,
     string? CorrectionReason,
     IReadOnlyList<ResultRow>? Results,
-    IReadOnlyList<QcRow>? Qc);
+    IReadOnlyList<QcRow>? Qc)
+{
+    /// <summary>Optional: the lab's own run (calibration, blank readings, XRF references and repeats), RunBlocks.cs.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public RunBlock? Run { get; init; }
+}
 
 public sealed record ResultRow(
     string? KitCode,
@@ -32,6 +36,12 @@ public sealed record ResultRow(
 {
     /// <summary>Where the row came from: a JSON pointer ("/results/3") or a CSV line ("row 5").</summary>
     [JsonIgnore] public string Where { get; init; } = "";
+
+    // Optional run figures; left out of the content hash when absent, so batches posted before them hash as they did.
+    /// <summary>The replicate intensities (counts) behind the value, to be read through the batch's calibration.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public IReadOnlyList<double>? Intensities { get; init; }
+    /// <summary>The sample's position in the instrument's run sequence.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public int? RunOrder { get; init; }
 }
 
 public sealed record QcRow(
@@ -45,6 +55,9 @@ public sealed record QcRow(
     string? Unit)
 {
     [JsonIgnore] public string Where { get; init; } = "";
+
+    /// <summary>Optional: the check's or blank's position in the run sequence.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public int? RunOrder { get; init; }
 }
 
 /// <param name="Where">JSON pointer or "row N" (CSV line, header = line 1); empty for the batch itself.</param>

@@ -13,6 +13,8 @@ public static class CsvBatchReader
     [
         "sampleType", "kitCode", "bottle", "position", "location", "analyte", "value", "unit", "qualifier", "mdl",
         "reportingLimit", "uncertainty", "replicates", "acidifiedAt", "expected", "measured", "unspiked", "spikeAdded", "duplicate",
+        // The optional run (CsvRunRows): intensities and positions, and the calibration and XRF rows' own columns.
+        "intensities", "runOrder", "line", "weighting", "throughBlank", "reference", "certifiedUncertainty",
     ];
 
     public static async Task<ParsedBatch> ReadAsync(Stream body, IQueryCollection query, CancellationToken ct)
@@ -21,6 +23,7 @@ public static class CsvBatchReader
         var header = ReadQuery(query, problems);
         var results = new List<ResultRow>();
         var qc = new List<QcRow>();
+        var runRows = new CsvRunRows(problems);
         await using var csv = CsvReader.Create(body, new CsvReaderOptions
         {
             TrackLineNumbers = true,
@@ -41,10 +44,10 @@ public static class CsvBatchReader
             var sampleType = cells.Text("sampleType");
             if (sampleType is null || sampleType.Equals("sample", StringComparison.OrdinalIgnoreCase))
                 results.Add(cells.Result());
-            else
+            else if (!runRows.TryAdd(cells, sampleType))
                 qc.Add(cells.Qc(sampleType));
         }
-        return new ParsedBatch(header with { Results = results, Qc = qc }, "csv", problems);
+        return new ParsedBatch(header with { Results = results, Qc = qc, Run = runRows.Block() }, "csv", problems);
     }
 
     private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, List<BatchProblem> problems)

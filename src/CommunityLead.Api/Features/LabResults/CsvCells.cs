@@ -7,6 +7,8 @@ namespace CommunityLead.Api.Features.LabResults;
 /// <summary>Typed access to the cells of one CSV row; a cell that doesn't parse is recorded as a problem.</summary>
 internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> index, string where, List<BatchProblem> problems)
 {
+    public string Where => where;
+
     public string? Text(string column)
     {
         if (!index.TryGetValue(column, out var i) || i >= csv.FieldCount) return null;
@@ -37,15 +39,18 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
         return null;
     }
 
-    public IReadOnlyList<double>? Replicates()
+    public IReadOnlyList<double>? Replicates() => Numbers("replicates");
+
+    /// <summary>Several readings in one cell, separated by '|' (or spaces).</summary>
+    public IReadOnlyList<double>? Numbers(string column)
     {
-        if (Text("replicates") is not { } text) return null;
+        if (Text(column) is not { } text) return null;
         var values = new List<double>();
         foreach (var part in text.Split(['|', ' '], StringSplitOptions.RemoveEmptyEntries))
         {
             if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out var v) || !double.IsFinite(v))
             {
-                problems.Add(new(where, "replicates", $"'{part}' is not a number; separate replicate readings with '|'."));
+                problems.Add(new(where, column, $"'{part}' is not a number; separate replicate readings with '|'."));
                 return null;
             }
             values.Add(v);
@@ -56,11 +61,19 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     public ResultRow Result() => new(
         Text("kitCode"), Text("bottle"), Whole("position"), Text("location"), Text("analyte"), Number("value"), Text("unit"),
         Text("qualifier"), Number("mdl"), Number("reportingLimit"), Number("uncertainty"), Replicates(), Text("acidifiedAt"))
-    { Where = where };
+    { Where = where, Intensities = Numbers("intensities"), RunOrder = Whole("runOrder") };
 
     public QcRow Qc(string sampleType) => new(
         sampleType, Text("analyte"), Number("expected"), Number("measured"), Number("unspiked"), Number("spikeAdded"),
         Number("duplicate"), Text("unit"))
-    { Where = where };
+    { Where = where, RunOrder = Whole("runOrder") };
+
+    public bool? Flag(string column)
+    {
+        if (Text(column) is not { } text) return null;
+        if (bool.TryParse(text, out var value)) return value;
+        problems.Add(new(where, column, $"'{text}' is not true or false."));
+        return null;
+    }
 
 }
