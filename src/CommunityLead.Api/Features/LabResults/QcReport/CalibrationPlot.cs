@@ -10,18 +10,22 @@ namespace CommunityLead.Api.Features.LabResults.QcReport;
 /// </summary>
 internal static class CalibrationPlot
 {
-    public static void Draw(XGraphics gfx, XRect box, CurveReview curve, RunInput run, string unit)
+    /// <param name="upTo">Draw only up to this concentration (the low range); null: the whole run.</param>
+    public static void Draw(XGraphics gfx, XRect box, CurveReview curve, RunInput run, string unit, double? upTo)
     {
         var fit = curve.Curve.Fit;
         var standards = curve.Curve.Standards;
         var checks = run.Sequence.Where(p => p.Analyte == curve.Analyte && p.Type == QcType.CalibrationCheck && p.Expected is not null && p.Measured is not null).ToList();
         var samples = Samples(curve, run).ToList();
         var xs = standards.Select(s => s.Nominal).Concat(checks.Select(c => c.Expected!.Value)).Concat(samples.Select(s => s.X)).ToList();
-        var xMax = xs.Max();
-        var ys = run.Calibrations.First(c => c.Analyte == curve.Analyte).Standards.SelectMany(s => s.Intensities)
-            .Concat(samples.Select(s => s.Y)).Append(fit.Predict(0)).Append(fit.Predict(xMax)).ToList();
-        var frame = new PlotFrame(gfx, box, (Math.Min(0, xs.Min()), xMax), (Math.Min(0, ys.Min()), ys.Max()));
-        frame.DrawAxes($"Calibration: {QcReportPdf.Name(curve.Analyte)}{(curve.Line is null ? "" : $", {curve.Line}")}",
+        var xMax = upTo ?? xs.Max();
+        var ys = run.Calibrations.First(c => c.Analyte == curve.Analyte).Standards.Where(s => s.Nominal <= xMax).SelectMany(s => s.Intensities)
+            .Concat(samples.Where(s => s.X <= xMax).Select(s => s.Y)).Append(fit.Predict(0)).Append(fit.Predict(xMax)).ToList();
+        // Concentrations start at zero; a sample the curve reads below zero is clipped here and stays in the table.
+        var frame = new PlotFrame(gfx, box, (0, xMax), (Math.Min(0, ys.Min()), ys.Max()));
+        frame.DrawAxes(upTo is null
+                ? $"Calibration: {QcReportPdf.Name(curve.Analyte)}{(curve.Line is null ? "" : $", {curve.Line}")}"
+                : $"Low range, to {upTo:0.##} {unit}",
             $"concentration ({unit})", "intensity (counts)");
 
         var state = gfx.Save();
@@ -39,9 +43,15 @@ internal static class CalibrationPlot
         foreach (var s in samples) Marks.Cross(gfx, frame.At(s.X, s.Y), s.X > curve.Curve.Highest ? Marks.FailColour : Marks.SampleColour);
         gfx.Restore(state);
 
-        gfx.DrawString("highest standard", Letters.Layout.LetterFonts.Shared.Tiny, XBrushes.DimGray,
-            new XRect(edge.X - 72, box.Top + 2, 70, 8), XStringFormats.TopRight);
-        Marks.Legend(gfx, box.Left, box.Bottom + 26,
+        if (edge.X <= box.Right)
+            gfx.DrawString("highest standard", Letters.Layout.LetterFonts.Shared.Tiny, XBrushes.DimGray,
+                new XRect(edge.X - 72, box.Top + 2, 70, 8), XStringFormats.TopRight);
+    }
+
+    public static void Legend(XGraphics gfx, double x, double y, CurveReview curve)
+    {
+        var fit = curve.Curve.Fit;
+        Marks.Legend(gfx, x, y,
             ((g, p) => Marks.Dot(g, p, Marks.StandardColour, 4.2, filled: false), "standard replicate"),
             ((g, p) => Marks.Dot(g, p, Marks.StandardColour), "standard mean"),
             ((g, p) => g.DrawLine(Marks.Line, p.X - 4, p.Y, p.X + 4, p.Y), $"fit: y = {fit.Slope:0.###}·x + {fit.Intercept:0.#}, r = {fit.R:0.00000}"),

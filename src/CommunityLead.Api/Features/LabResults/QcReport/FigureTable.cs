@@ -73,7 +73,7 @@ internal static class FigureTable
     {
         null => "—",
         { } x when Math.Abs(x) >= 10_000 => x.ToString("#,0", CultureInfo.InvariantCulture),
-        { } x => x.ToString("0.####", CultureInfo.InvariantCulture),
+        { } x => x.ToString("G5", CultureInfo.InvariantCulture),
     };
 
     private static string WindowText(double? low, double? high) => (low, high) switch

@@ -80,7 +80,6 @@ internal sealed class PlotFrame
     private static string Tick(double value, double step)
     {
         var decimals = Math.Max(0, -(int)Math.Floor(Math.Log10(step) + 1e-9));
-        if (Math.Abs(value) >= 100_000) return value.ToString("0.###E+0", CultureInfo.InvariantCulture);
         return Math.Round(value, decimals + 1).ToString("#,0." + new string('#', decimals + 1), CultureInfo.InvariantCulture);
     }
 }

@@ -32,7 +32,7 @@ internal static class QcReportPdf
         do
         {
             var gfx = Track(open, NewPage(document, report, ++page));
-            var top = page == 1 ? 170 : 80;
+            var top = page == 1 ? 170 : 100;
             gfx.DrawString("Every figure and its verdict", LetterFonts.Shared.Heading, XBrushes.Black, new XPoint(Margin, top - 8));
             next = FigureTable.Draw(gfx, new XRect(Margin, top, 515, 842 - Margin - 20 - top), report.Verdict.Checks, next);
         }
@@ -41,6 +41,13 @@ internal static class QcReportPdf
         using var stream = new MemoryStream();
         document.Save(stream);
         return stream.ToArray();
+    }
+
+    /// <summary>Up to the second-highest standard, with room: where the low standards and most samples can be told apart.</summary>
+    private static double LowRange(Rules.Calibration.CurveReview curve)
+    {
+        var levels = curve.Curve.Standards.Select(s => s.Nominal).Where(n => n > 0).OrderDescending().ToList();
+        return levels.Count >= 2 ? levels[1] * 1.5 : curve.Curve.Highest;
     }
 
     private static XGraphics Track(List<XGraphics> open, XGraphics gfx)
@@ -58,8 +65,12 @@ internal static class QcReportPdf
         var top = 200.0;
         if (curve is not null)
         {
-            CalibrationPlot.Draw(gfx, new XRect(Margin + 62, top, 515 - 62, 230), curve, report.Run!, unit);
-            top += 230 + 60;
+            // Standards usually span two decades: the whole range squeezes the low end, where most samples sit, into a
+            // corner, so the low range is drawn again beside it.
+            CalibrationPlot.Draw(gfx, new XRect(Margin + 52, top, 200, 210), curve, report.Run!, unit, upTo: null);
+            CalibrationPlot.Draw(gfx, new XRect(Margin + 52 + 200 + 62, top, 201, 210), curve, report.Run!, unit, upTo: LowRange(curve));
+            CalibrationPlot.Legend(gfx, Margin + 52, top + 236, curve);
+            top += 210 + 70;
             ResidualPlot.Draw(gfx, new XRect(Margin + 62, top, 515 - 62, 110), curve, unit);
             top += 110 + 50;
         }
