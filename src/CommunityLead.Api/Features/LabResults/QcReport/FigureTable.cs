@@ -22,7 +22,9 @@ internal static class FigureTable
         for (; i < checks.Count; i++)
         {
             var c = checks[i];
-            string[] cells = [c.Analyte == Analyte.Lead ? "lead" : "copper", Figure(c), Number(c.Value), WindowText(c.Low, c.High),
+            // r is judged in its fourth decimal; five significant figures would print 0.99999 as 1.
+            var value = c.Figure == "correlation r" && c.Value is { } r ? r.ToString("0.000000", CultureInfo.InvariantCulture) : Number(c.Value);
+            string[] cells = [c.Analyte == Analyte.Lead ? "lead" : "copper", Figure(c), value, WindowText(c.Low, c.High),
                 c.Passed ? "pass" : "FAIL", c.Detail];
             if (y + Height(gfx, cells, fonts.Tiny) > area.Bottom) break;
             Row(gfx, area.Left, ref y, cells, fonts.Tiny, c.Passed ? XBrushes.Black : new XSolidBrush(Marks.FailColour), header: false);
