@@ -34,6 +34,17 @@ public static class SettingsChecks
             p.Window(s.Qc.MatrixSpikeLowPercent, s.Qc.MatrixSpikeHighPercent, "Qc:MatrixSpikeLowPercent", "Qc:MatrixSpikeHighPercent");
             p.Positive(s.Qc.DuplicateMaxRpdPercent, "Qc:DuplicateMaxRpdPercent");
             p.AtLeast(s.Qc.SamplesPerCalibrationCheck, 1, "Qc:SamplesPerCalibrationCheck");
+            // The lab's own run (Rules/LabResults/QcWindows.Run.cs).
+            p.Check(s.Qc.MinCorrelation is > 0 and <= 1, "Qc:MinCorrelation", "must be above 0 and at most 1", s.Qc.MinCorrelation);
+            p.Positive(s.Qc.BackCalculatedPercent, "Qc:BackCalculatedPercent");
+            p.Check(s.Qc.BackCalculatedLowestPercent >= s.Qc.BackCalculatedPercent, "Qc:BackCalculatedLowestPercent",
+                "must be at least Qc:BackCalculatedPercent", s.Qc.BackCalculatedLowestPercent);
+            p.Positive(s.Qc.MaxReplicateRsdPercent, "Qc:MaxReplicateRsdPercent");
+            p.Positive(s.Qc.MaxComputedDifferencePercent, "Qc:MaxComputedDifferencePercent");
+            p.Positive(s.Qc.MaxDetectionLimitOverMdl, "Qc:MaxDetectionLimitOverMdl");
+            p.Positive(s.Qc.MaxBlankDriftOfReportingLimit, "Qc:MaxBlankDriftOfReportingLimit");
+            p.Window(s.Qc.ReferenceSoilLowPercent, s.Qc.ReferenceSoilHighPercent, "Qc:ReferenceSoilLowPercent", "Qc:ReferenceSoilHighPercent");
+            p.Positive(s.Qc.RepeatAgreementSigmas, "Qc:RepeatAgreementSigmas");
             p.AtLeast(s.Holding.AnalysisWithinMonths, 1, "Holding:AnalysisWithinMonths");
             p.Positive(s.Holding.AcidificationWithin, "Holding:AcidificationWithin");
             p.Check(s.Holding.WaitAfterAcidification >= TimeSpan.Zero, "Holding:WaitAfterAcidification", "cannot be negative", s.Holding.WaitAfterAcidification);

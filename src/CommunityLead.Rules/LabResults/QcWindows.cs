@@ -5,7 +5,7 @@ namespace CommunityLead.Rules.LabResults;
 /// recalled rather than read in the method text; a lab's own quality manual may set others.
 /// Recovery windows are inclusive at both ends.
 /// </summary>
-public sealed record QcWindows
+public sealed partial record QcWindows
 {
     /// <summary>Calibration check within ±10% of its true value [memory: EPA Methods 200.7/200.8].</summary>
     public double CalibrationCheckLowPercent { get; init; } = 90;

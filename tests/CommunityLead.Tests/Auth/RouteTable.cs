@@ -60,6 +60,8 @@ public static class RouteTable
         ["GET /api/lab/batches"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/lab/batches")),
         ["GET /api/lab/batches/{batchId}"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/lab/batches/{await s.BatchAsync(calibrationMeasured: 10.1)}")),
+        ["GET /api/lab/batches/{batchId}/qc-report"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/lab/batches/{await s.BatchAsync(calibrationMeasured: 10.1)}/qc-report")),
         // A calibration check 50% high fails QC, so the batch is held and waits for a coordinator.
         ["POST /api/lab/batches/{batchId}/release"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Post, $"/api/lab/batches/{await s.BatchAsync(calibrationMeasured: 15)}/release",

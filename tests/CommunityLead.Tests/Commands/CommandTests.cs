@@ -80,9 +80,12 @@ public class CommandTests
         // The scenario shows kits in several states and at least one flagged collection.
         Assert.True(app.WithDb(db => db.Kits.Select(k => k.State).Distinct().Count()) >= 5);
         Assert.True(app.WithDb(db => db.KitFlags.Any()));
-        // The lab batches went through the real intake: one held, then corrected; kits interpreted; letters sent.
-        Assert.Equal(4, app.WithDb(db => db.LabBatches.Count()));
-        Assert.Equal(1, app.WithDb(db => db.LabBatches.Count(b => b.Status == CommunityLead.Api.Data.Entities.BatchStatus.Held)));
+        // The lab batches went through the real intake: one held, then corrected; kits interpreted; letters sent. Then four
+        // runs with their calibration: one passes, and a bent curve, drifting blanks and an over-range sample are held.
+        Assert.Equal(8, app.WithDb(db => db.LabBatches.Count()));
+        Assert.Equal(4, app.WithDb(db => db.LabBatches.Count(b => b.Status == CommunityLead.Api.Data.Entities.BatchStatus.Held)));
+        Assert.Equal(["BCL-RUN-06", "BCL-RUN-07", "BCL-RUN-08"], app.WithDb(db => db.LabBatches
+            .Where(b => b.RunJson != null && b.Status == CommunityLead.Api.Data.Entities.BatchStatus.Held).Select(b => b.BatchId).OrderBy(b => b).ToList()));
         Assert.True(app.WithDb(db => db.Interpretations.Count()) >= 100);
         Assert.True(app.WithDb(db => db.Letters.Count(l => l.SentAtUtc != null)) >= 20);
         Assert.True(app.WithDb(db => db.Attention.Any(a => a.Reason == CommunityLead.Rules.Interpretation.AttentionFlag.Urgent)));
@@ -101,7 +104,7 @@ public class CommandTests
         Assert.Equal(kits, app.WithDb(db => db.Kits.Count()));
         Assert.Equal(audit, app.WithDb(db => db.AuditTrail.Count()));
         Assert.Equal(letters, app.WithDb(db => db.Letters.Count()));
-        Assert.Equal(4, app.WithDb(db => db.LabBatches.Count()));
+        Assert.Equal(8, app.WithDb(db => db.LabBatches.Count()));
     }
 
     [PostgresFact]

@@ -142,6 +142,7 @@ internal static class ColumnDecisions
         new Unlimited("IssuedLetter.ContentJson", "the letter's content, as JSON"),
         new Unlimited("KitInterpretation.OutcomeJson", "the interpretation, as JSON"),
         new Unlimited("LabBatch.QcJson", "the QC verdict, as JSON"),
+        new Unlimited("LabBatch.RunJson", "the lab's own run as checked (calibration, positions, XRF), as JSON"),
     ];
 
     /// <summary>The audit trail and "done by" columns copy the key's label, or name the command line or demo loader.</summary>

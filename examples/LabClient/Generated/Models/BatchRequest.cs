@@ -62,6 +62,14 @@ namespace CommunityLead.LabClient.Api.Models
 #else
         public List<global::CommunityLead.LabClient.Api.Models.ResultRow> Results { get; set; }
 #endif
+        /// <summary>The run property</summary>
+#if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
+#nullable enable
+        public global::CommunityLead.LabClient.Api.Models.RunBlock? Run { get; set; }
+#nullable restore
+#else
+        public global::CommunityLead.LabClient.Api.Models.RunBlock Run { get; set; }
+#endif
         /// <summary>
         /// Creates a new instance of the appropriate class based on discriminator value
         /// </summary>
@@ -87,6 +95,7 @@ namespace CommunityLead.LabClient.Api.Models
                 { "method", n => { Method = n.GetStringValue(); } },
                 { "qc", n => { Qc = n.GetCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.QcRow>(global::CommunityLead.LabClient.Api.Models.QcRow.CreateFromDiscriminatorValue)?.AsList(); } },
                 { "results", n => { Results = n.GetCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.ResultRow>(global::CommunityLead.LabClient.Api.Models.ResultRow.CreateFromDiscriminatorValue)?.AsList(); } },
+                { "run", n => { Run = n.GetObjectValue<global::CommunityLead.LabClient.Api.Models.RunBlock>(global::CommunityLead.LabClient.Api.Models.RunBlock.CreateFromDiscriminatorValue); } },
             };
         }
         /// <summary>
@@ -103,6 +112,7 @@ namespace CommunityLead.LabClient.Api.Models
             writer.WriteStringValue("method", Method);
             writer.WriteCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.QcRow>("qc", Qc);
             writer.WriteCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.ResultRow>("results", Results);
+            writer.WriteObjectValue<global::CommunityLead.LabClient.Api.Models.RunBlock>("run", Run);
         }
     }
 }

@@ -26,6 +26,8 @@ namespace CommunityLead.LabClient.Api.Models
         public double? Expected { get; set; }
         /// <summary>The measured property</summary>
         public double? Measured { get; set; }
+        /// <summary>The runOrder property</summary>
+        public int? RunOrder { get; set; }
         /// <summary>The spikeAdded property</summary>
         public double? SpikeAdded { get; set; }
         /// <summary>The type property</summary>
@@ -68,6 +70,7 @@ namespace CommunityLead.LabClient.Api.Models
                 { "duplicate", n => { Duplicate = n.GetDoubleValue(); } },
                 { "expected", n => { Expected = n.GetDoubleValue(); } },
                 { "measured", n => { Measured = n.GetDoubleValue(); } },
+                { "runOrder", n => { RunOrder = n.GetIntValue(); } },
                 { "spikeAdded", n => { SpikeAdded = n.GetDoubleValue(); } },
                 { "type", n => { Type = n.GetStringValue(); } },
                 { "unit", n => { Unit = n.GetStringValue(); } },
@@ -85,6 +88,7 @@ namespace CommunityLead.LabClient.Api.Models
             writer.WriteDoubleValue("duplicate", Duplicate);
             writer.WriteDoubleValue("expected", Expected);
             writer.WriteDoubleValue("measured", Measured);
+            writer.WriteIntValue("runOrder", RunOrder);
             writer.WriteDoubleValue("spikeAdded", SpikeAdded);
             writer.WriteStringValue("type", Type);
             writer.WriteStringValue("unit", Unit);

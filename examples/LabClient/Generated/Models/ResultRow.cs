@@ -36,6 +36,14 @@ namespace CommunityLead.LabClient.Api.Models
 #else
         public string Bottle { get; set; }
 #endif
+        /// <summary>The intensities property</summary>
+#if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
+#nullable enable
+        public List<double?>? Intensities { get; set; }
+#nullable restore
+#else
+        public List<double?> Intensities { get; set; }
+#endif
         /// <summary>The kitCode property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
 #nullable enable
@@ -74,6 +82,8 @@ namespace CommunityLead.LabClient.Api.Models
 #endif
         /// <summary>The reportingLimit property</summary>
         public double? ReportingLimit { get; set; }
+        /// <summary>The runOrder property</summary>
+        public int? RunOrder { get; set; }
         /// <summary>The uncertainty property</summary>
         public double? Uncertainty { get; set; }
         /// <summary>The unit property</summary>
@@ -107,6 +117,7 @@ namespace CommunityLead.LabClient.Api.Models
                 { "acidifiedAt", n => { AcidifiedAt = n.GetStringValue(); } },
                 { "analyte", n => { Analyte = n.GetStringValue(); } },
                 { "bottle", n => { Bottle = n.GetStringValue(); } },
+                { "intensities", n => { Intensities = n.GetCollectionOfPrimitiveValues<double?>()?.AsList(); } },
                 { "kitCode", n => { KitCode = n.GetStringValue(); } },
                 { "location", n => { Location = n.GetStringValue(); } },
                 { "mdl", n => { Mdl = n.GetDoubleValue(); } },
@@ -114,6 +125,7 @@ namespace CommunityLead.LabClient.Api.Models
                 { "qualifier", n => { Qualifier = n.GetStringValue(); } },
                 { "replicates", n => { Replicates = n.GetCollectionOfPrimitiveValues<double?>()?.AsList(); } },
                 { "reportingLimit", n => { ReportingLimit = n.GetDoubleValue(); } },
+                { "runOrder", n => { RunOrder = n.GetIntValue(); } },
                 { "uncertainty", n => { Uncertainty = n.GetDoubleValue(); } },
                 { "unit", n => { Unit = n.GetStringValue(); } },
                 { "value", n => { Value = n.GetDoubleValue(); } },
@@ -129,6 +141,7 @@ namespace CommunityLead.LabClient.Api.Models
             writer.WriteStringValue("acidifiedAt", AcidifiedAt);
             writer.WriteStringValue("analyte", Analyte);
             writer.WriteStringValue("bottle", Bottle);
+            writer.WriteCollectionOfPrimitiveValues<double?>("intensities", Intensities);
             writer.WriteStringValue("kitCode", KitCode);
             writer.WriteStringValue("location", Location);
             writer.WriteDoubleValue("mdl", Mdl);
@@ -136,6 +149,7 @@ namespace CommunityLead.LabClient.Api.Models
             writer.WriteStringValue("qualifier", Qualifier);
             writer.WriteCollectionOfPrimitiveValues<double?>("replicates", Replicates);
             writer.WriteDoubleValue("reportingLimit", ReportingLimit);
+            writer.WriteIntValue("runOrder", RunOrder);
             writer.WriteDoubleValue("uncertainty", Uncertainty);
             writer.WriteStringValue("unit", Unit);
             writer.WriteDoubleValue("value", Value);

@@ -29,6 +29,8 @@ public class LabBatch
     public BatchStatus Status { get; set; }
     /// <summary>The QC verdict as computed at intake, every figure with its window (JSON).</summary>
     public required string QcJson { get; set; }
+    /// <summary>The lab's own run (calibration, positions, XRF references) as checked, JSON; null when the batch had none.</summary>
+    public string? RunJson { get; set; }
     public int ResultCount { get; set; }
     public required string PostedBy { get; set; }
     public DateTime PostedAtUtc { get; set; }

@@ -649,6 +649,9 @@ namespace CommunityLead.Api.Data.Migrations
                     b.Property<int>("ResultCount")
                         .HasColumnType("INTEGER");
 
+                    b.Property<string>("RunJson")
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("Status")
                         .IsConcurrencyToken()
                         .IsRequired()

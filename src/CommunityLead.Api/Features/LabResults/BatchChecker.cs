@@ -55,6 +55,7 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
                 .Select(x => new SampleFacts(x.KitId, x.Sample.Bottle, x.Sample.Position, x.Sample.Location, x.Sample.CollectedAt))
                 .ToListAsync(ct))
             .ToLookup(s => s.KitId);
+        new RunBlockCheck(problems).CheckRows(chunk, []);
         var rowCheck = new ResultRowCheck(analyzedAt, options.Holding, problems);
         for (var i = 0; i < chunk.Count; i++)
         {
@@ -89,9 +90,17 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         // passed, so that a bad soil row does not also make the soil QC look like water QC with the wrong unit.
         var matrix = anyKit && allSoil ? Matrix.Soil : Matrix.Water;
         var qc = new QcRowCheck(problems).CheckAll(qcRows, matrix);
+        // The optional run blocks (calibration, XRF references and repeats): RunBlockCheck. Result rows' own run
+        // figures were checked chunk by chunk (AddResultsAsync).
+        var runCheck = new RunBlockCheck(problems);
+        runCheck.CheckRows([], qcRows);
+        var (calibrations, references, repeats) = runCheck.Check(header.Run, matrix);
         if (problems.Count > 0) return null;
         return new CheckedBatch(header.BatchId!, header.Method!, analyzedAt!.Value, header.Correction == true,
-            header.CorrectionReason, results, qc);
+            header.CorrectionReason, results, qc)
+        {
+            Run = RunAssembly.Assemble(results, qcRows, qc, calibrations, references, repeats),
+        };
     }
 
     internal static DateTimeOffset? Time(string? text) =>

@@ -34,7 +34,7 @@ internal sealed class BatchHash : IDisposable
     {
         using var hash = new BatchHash(request, options);
         hash.AddResults(request.Results ?? []);
-        return hash.Finish(request.Qc ?? []);
+        return hash.Finish(request.Qc ?? [], request.Run);
     }
 
     public void AddResults(IEnumerable<ResultRow> rows)
@@ -43,14 +43,15 @@ internal sealed class BatchHash : IDisposable
         Drain();
     }
 
-    /// <summary>QC rows come last, as in the request; after this the hash is spent.</summary>
-    public string Finish(IEnumerable<QcRow> qc)
+    /// <summary>QC rows, then the optional run (written only when there is one, as serializing the request does); after this the hash is spent.</summary>
+    public string Finish(IEnumerable<QcRow> qc, RunBlock? run)
     {
         writer.WriteEndArray();
         writer.WritePropertyName(Name(nameof(BatchRequest.Qc)));
         writer.WriteStartArray();
         foreach (var row in qc) JsonSerializer.Serialize(writer, row, options);
         writer.WriteEndArray();
+        if (run is not null) Property(nameof(BatchRequest.Run), run);
         writer.WriteEndObject();
         Drain();
         return Convert.ToHexStringLower(sha.GetHashAndReset());

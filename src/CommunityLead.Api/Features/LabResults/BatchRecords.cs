@@ -1,6 +1,7 @@
 using System.Text.Json;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Rules.Calibration;
 using CommunityLead.Rules.LabResults;
 
 namespace CommunityLead.Api.Features.LabResults;
@@ -14,6 +15,8 @@ public static class BatchRecords
         var sampleCounts = batch.Results.GroupBy(r => r.Analyte).ToDictionary(g => g.Key, g => g.Count());
         var reportingLimits = batch.Results.GroupBy(r => r.Analyte).ToDictionary(g => g.Key, g => g.Min(r => r.ReportingLimit));
         var verdict = QcEvaluator.Evaluate([.. batch.Qc.Select(q => q.Sample)], sampleCounts, reportingLimits, windows);
+        // The lab's own run, checked here too: a failure (a sample above the calibrated range, say) holds the batch.
+        if (batch.Run is { } run) verdict = RunReview.Evaluate(run, windows).Extend(verdict);
         return new LabBatch
         {
             BatchId = batch.BatchId,
@@ -26,6 +29,7 @@ public static class BatchRecords
             Format = format,
             Status = verdict.Passed ? BatchStatus.Accepted : BatchStatus.Held,
             QcJson = JsonSerializer.Serialize(verdict, json),
+            RunJson = batch.Run is null ? null : JsonSerializer.Serialize(batch.Run, json),
             ResultCount = batch.Results.Count,
             PostedBy = actor.Label,
             PostedAtUtc = nowUtc,

@@ -13,7 +13,11 @@ public sealed record BatchRequest(
     bool? Correction,
     string? CorrectionReason,
     IReadOnlyList<ResultRow>? Results,
-    IReadOnlyList<QcRow>? Qc);
+    IReadOnlyList<QcRow>? Qc)
+{
+    /// <summary>Optional: the lab's own run (calibration, blank readings, XRF references and repeats), RunBlocks.cs.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public RunBlock? Run { get; init; }
+}
 
 public sealed record ResultRow(
     string? KitCode,
@@ -35,6 +39,12 @@ public sealed record ResultRow(
 
     /// <summary>Cells of this row that did not parse (CSV), reported already: the checks must not also call them missing.</summary>
     [JsonIgnore] public IReadOnlyCollection<string>? Unreadable { get; init; }
+
+    // Optional run figures; left out of the content hash when absent, so batches posted before them hash as they did.
+    /// <summary>The replicate intensities (counts) behind the value, to be read through the batch's calibration.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public IReadOnlyList<double>? Intensities { get; init; }
+    /// <summary>The sample's position in the instrument's run sequence.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public int? RunOrder { get; init; }
 }
 
 public sealed record QcRow(
@@ -50,6 +60,9 @@ public sealed record QcRow(
     [JsonIgnore] public string Where { get; init; } = "";
 
     [JsonIgnore] public IReadOnlyCollection<string>? Unreadable { get; init; }
+
+    /// <summary>Optional: the check's or blank's position in the run sequence.</summary>
+    [JsonIgnore(Condition = JsonIgnoreCondition.WhenWritingNull)] public int? RunOrder { get; init; }
 }
 
 /// <param name="Where">JSON pointer or "row N" (CSV line, header = line 1); empty for the batch itself.</param>

@@ -29,4 +29,8 @@ public sealed record CheckedQc(QcSample Sample, string Unit);
 
 public sealed record CheckedBatch(
     string BatchId, string Method, DateTimeOffset AnalyzedAt, bool Correction, string? CorrectionReason,
-    IReadOnlyList<CheckedResult> Results, IReadOnlyList<CheckedQc> Qc);
+    IReadOnlyList<CheckedResult> Results, IReadOnlyList<CheckedQc> Qc)
+{
+    /// <summary>The lab's own run when the batch carried one (calibration, positions, XRF references), else null.</summary>
+    public Rules.Calibration.RunInput? Run { get; init; }
+}

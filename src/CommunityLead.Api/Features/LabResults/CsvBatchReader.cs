@@ -13,6 +13,8 @@ public static class CsvBatchReader
     [
         "sampleType", "kitCode", "bottle", "position", "location", "analyte", "value", "unit", "qualifier", "mdl",
         "reportingLimit", "uncertainty", "replicates", "acidifiedAt", "expected", "measured", "unspiked", "spikeAdded", "duplicate",
+        // The optional run (CsvRunRows): intensities and positions, and the calibration and XRF rows' own columns.
+        "intensities", "runOrder", "line", "weighting", "throughBlank", "reference", "certifiedUncertainty",
     ];
 
     /// <summary>
@@ -34,6 +36,7 @@ public static class CsvBatchReader
             chunk = new List<ResultRow>(BatchChecker.ChunkSize);
         }
 
+        var runRows = new CsvRunRows(problems);
         await using var csv = CsvReader.Create(body, new CsvReaderOptions
         {
             TrackLineNumbers = true,
@@ -45,7 +48,7 @@ public static class CsvBatchReader
         if (csv.Headers.Count == 0)
         {
             problems.Add(new("row 1", "header", "The file is empty; it needs a header row and one row per result."));
-            return new CsvRows(qc, problems.Count - start);
+            return new CsvRows(qc, problems.Count - start, null);
         }
         var index = MapColumns(csv.Headers, problems);
         while (await csv.ReadAsync(ct))
@@ -59,11 +62,11 @@ public static class CsvBatchReader
                 chunk.Add(cells.Result());
                 if (chunk.Count == BatchChecker.ChunkSize) await Hand();
             }
-            else
+            else if (!runRows.TryAdd(cells, sampleType))
                 qc.Add(cells.Qc(sampleType));
         }
         if (chunk.Count > 0) await Hand();
-        return new CsvRows(qc, problems.Count - start - foundByOthers);
+        return new CsvRows(qc, problems.Count - start - foundByOthers, runRows.Block());
     }
 
     private static Dictionary<string, int> MapColumns(IReadOnlyList<string> headers, BatchProblemList problems)
@@ -107,4 +110,4 @@ public static class CsvBatchReader
 }
 
 /// <param name="ReadingProblems">Problems found by reading (cells, columns), as against those found by the checks.</param>
-public sealed record CsvRows(IReadOnlyList<QcRow> Qc, int ReadingProblems);
+public sealed record CsvRows(IReadOnlyList<QcRow> Qc, int ReadingProblems, RunBlock? Run);

@@ -15,6 +15,8 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
         (unreadable ??= []).Add(column);
     }
 
+    public string Where => where;
+
     public string? Text(string column)
     {
         if (!index.TryGetValue(column, out var i) || i >= csv.FieldCount) return null;
@@ -50,15 +52,18 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
         return null;
     }
 
-    public IReadOnlyList<double>? Replicates()
+    public IReadOnlyList<double>? Replicates() => Numbers("replicates");
+
+    /// <summary>Several readings in one cell, separated by '|' (or spaces).</summary>
+    public IReadOnlyList<double>? Numbers(string column)
     {
-        if (Text("replicates") is not { } text) return null;
+        if (Text(column) is not { } text) return null;
         var values = new List<double>();
         foreach (var part in text.Split(['|', ' '], StringSplitOptions.RemoveEmptyEntries))
         {
             if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out var v) || !double.IsFinite(v))
             {
-                Unreadable("replicates", $"'{part}' is not a number; separate replicate readings with '|'.");
+                Unreadable(column, $"'{part}' is not a number; separate replicate readings with '|'.");
                 return null;
             }
             values.Add(v);
@@ -69,11 +74,19 @@ internal sealed class CsvCells(CsvReader csv, IReadOnlyDictionary<string, int> i
     public ResultRow Result() => new(
         Text("kitCode"), Text("bottle"), Whole("position"), Text("location"), Text("analyte"), Number("value"), Text("unit"),
         Text("qualifier"), Number("mdl"), Number("reportingLimit"), Number("uncertainty"), Replicates(), Text("acidifiedAt"))
-    { Where = where, Unreadable = unreadable };
+    { Where = where, Intensities = Numbers("intensities"), RunOrder = Whole("runOrder"), Unreadable = unreadable };
 
     public QcRow Qc(string sampleType) => new(
         sampleType, Text("analyte"), Number("expected"), Number("measured"), Number("unspiked"), Number("spikeAdded"),
         Number("duplicate"), Text("unit"))
-    { Where = where, Unreadable = unreadable };
+    { Where = where, RunOrder = Whole("runOrder"), Unreadable = unreadable };
+
+    public bool? Flag(string column)
+    {
+        if (Text(column) is not { } text) return null;
+        if (bool.TryParse(text, out var value)) return value;
+        Unreadable(column, $"'{text}' is not true or false.");
+        return null;
+    }
 
 }

@@ -23,7 +23,8 @@ public static class CsvIntake
             hash.AddResults(rows);
             await checker.AddResultsAsync(rows, ct);
         }, ct);
-        var digest = hash.Finish(read.Qc);
+        header = header with { Run = read.Run };
+        var digest = hash.Finish(read.Qc, read.Run);
 
         // As for JSON: a repeat is recognised before the checks count, and only content that was read whole can be one.
         var latest = queryProblems + read.ReadingProblems == 0 ? await BatchIntake.LatestAsync(intake.Db, header.BatchId, ct) : null;

@@ -9,6 +9,7 @@ public static class LabResultEndpoints
     // POST /api/lab/batches                      a batch, JSON or CSV                   lab
     // GET  /api/lab/batches?status=              batches, newest first                  lab, coordinator
     // GET  /api/lab/batches/{batchId}            latest version, verdict, results       lab, coordinator
+    // GET  /api/lab/batches/{batchId}/qc-report  the run's QC report, PDF               lab, coordinator
     // POST /api/lab/batches/{batchId}/release    put a held batch into effect           coordinator
     // POST /api/lab/mdl                          method detection limit                 lab, coordinator
     public static void MapLabResults(this IEndpointRouteBuilder app)
@@ -35,6 +36,9 @@ public static class LabResultEndpoints
             .WithQuery<Data.Entities.BatchStatus>("status", "Only batches with this verdict");
         readers.MapGet("/batches/{batchId}", BatchQueries.Get).WithName("getLabBatch")
             .WithSummary("A batch's latest version: verdict, every QC figure and the results").ProducesProblem(StatusCodes.Status404NotFound);
+        readers.MapGet("/batches/{batchId}/qc-report", QcReport.QcReports.Get).WithName("getLabBatchQcReport")
+            .WithSummary("The latest version's QC report: calibration and residual plots, run-order charts, every figure with its verdict (PDF)")
+            .Produces(StatusCodes.Status200OK, contentType: "application/pdf").ProducesProblem(StatusCodes.Status404NotFound);
         readers.MapPost("/mdl", DetectionLimitCalculation.Calculate).WithName("calculateMdl")
             .WithSummary("Method detection limit from replicate spiked samples (40 CFR 136 App. B)").ProducesValidationProblem();
 

@@ -29,7 +29,7 @@ public sealed class BatchHashTests
         hash.AddResults(request.Results!.Take(1));
         hash.AddResults(request.Results!.Skip(1));
 
-        Assert.Equal(whole, hash.Finish(request.Qc!));
+        Assert.Equal(whole, hash.Finish(request.Qc!, request.Run));
         Assert.Equal(whole, BatchHash.Of(request, options));
         Assert.NotEqual(whole, BatchHash.Of(request with { Results = request.Results!.Take(1).ToList() }, options));
     }

@@ -677,6 +677,9 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                     b.Property<int>("ResultCount")
                         .HasColumnType("integer");
 
+                    b.Property<string>("RunJson")
+                        .HasColumnType("text");
+
                     b.Property<string>("Status")
                         .IsConcurrencyToken()
                         .IsRequired()
