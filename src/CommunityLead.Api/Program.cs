@@ -42,6 +42,7 @@ if (app.Services.GetRequiredService<IOptions<DatabaseOptions>>().Value.MigrateOn
 
 app.UseForwardedHeaders();
 app.UseSecurityHeaders();
+app.UseCommunityLeadPages();
 app.UseExceptionHandler();
 app.UseStatusCodePages();
 app.Use(NoNulText.InQueryAsync);

@@ -31,6 +31,8 @@ public static class RouteTable
         ["POST /api/kits/"] = Coordinator(HttpStatusCode.Created,
             async s => Send(HttpMethod.Post, "/api/kits", new { householdId = await s.HouseholdAsync(), kind = "water" })),
         ["GET /api/kits/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/kits?state=issued&page=1")),
+        ["GET /api/kits/labels"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/kits/labels?codes={await s.KitAsync()}&stock=a4-21")),
         ["GET /api/kits/{code}"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/kits/{await s.KitAsync()}")),
         ["POST /api/kits/{code}/collection"] = Coordinator(HttpStatusCode.OK,
@@ -60,6 +62,7 @@ public static class RouteTable
         ["POST /api/lab/mdl"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK, _ => Send(HttpMethod.Post, "/api/lab/mdl",
             new { spiked = new[] { 1.1, 0.9, 1.0, 1.2, 0.95, 1.05, 1.0 } })),
         ["GET /api/attention/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/attention")),
+        ["GET /api/attention/kits"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/attention/kits")),
         ["POST /api/attention/{id:int}/resolve"] = Coordinator(HttpStatusCode.NoContent,
             async s => Send(HttpMethod.Post, $"/api/attention/{await s.AttentionItemAsync()}/resolve", new { note = "called; filter offered" })),
 

@@ -15,6 +15,9 @@ public sealed record ResolveRequest(string? Note);
 public static class AttentionEndpoints
 {
     // GET  /api/attention                 kits needing a person, most urgent first     coordinator
+    //                                     (one entry per reason)
+    // GET  /api/attention/kits            the same, one entry per kit with all its       coordinator
+    //                                     reasons and the household's name and phone
     // POST /api/attention/{id}/resolve    done, with a note (e.g. "called, filter given")  coordinator
     //                                     (for urgent and implausible items: releases the kit's letter)
     public static void MapAttention(this IEndpointRouteBuilder app)
@@ -23,6 +26,7 @@ public static class AttentionEndpoints
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         group.MapGet("/", List);
+        group.MapGet("/kits", AttentionByKit.List);
         group.MapPost("/{id:int}/resolve", Resolve).ProducesProblem(StatusCodes.Status404NotFound);
     }
 

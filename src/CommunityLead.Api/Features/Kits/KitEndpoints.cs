@@ -1,4 +1,5 @@
 using CommunityLead.Api.Auth;
+using CommunityLead.Api.Features.Kits.Labels;
 using CommunityLead.Api.Infrastructure;
 
 namespace CommunityLead.Api.Features.Kits;
@@ -7,6 +8,7 @@ public static class KitEndpoints
 {
     // POST /api/kits                        issue a kit to a household          coordinator
     // GET  /api/kits?state=&householdId=    the work queue                      coordinator
+    // GET  /api/kits/labels?codes=&stock=   a PDF sheet of labels (letter-30, a4-21)  coordinator
     // GET  /api/kits/{code}                 one kit (lab: without household)    coordinator, lab
     // POST /api/kits/{code}/collection      record the bottles                  coordinator
     // POST /api/kits/{code}/receipt         the kit arrived                     coordinator, lab
@@ -22,6 +24,7 @@ public static class KitEndpoints
         var coordinator = kits.MapGroup("").RequireAuthorization(Policies.Coordinator);
         coordinator.MapPost("/", KitMoves.Issue);
         coordinator.MapGet("/", KitQueries.List);
+        coordinator.MapGet("/labels", KitLabels.Sheet).Produces(StatusCodes.Status200OK, contentType: "application/pdf");
         coordinator.MapPost("/{code}/collection", CollectionRecording.Record);
         coordinator.MapPost("/{code}/cancel", KitMoves.Cancel);
         coordinator.MapPost("/{code}/lost", KitMoves.MarkLost);
