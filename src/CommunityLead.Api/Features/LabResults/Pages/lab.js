@@ -19,13 +19,19 @@ function rowText(row, text, csv) {
   return '';
 }
 
+/** "row 5" in the page's language; a JSON pointer as it is. */
+function rowName(row) {
+  const line = /^row (\d+)$/.exec(row || '');
+  return line ? t('lab.rowNumber', { n: line[1] }) : row || t('lab.wholeBatch');
+}
+
 function showProblems(problems, text, csv) {
   byId('outcome').hidden = true;
   byId('problem-table').replaceChildren(el('table', {},
     el('caption', {}, t('lab.problemsCaption', { count: problems.length })),
     el('thead', {}, el('tr', {}, ['lab.row', 'lab.rowText', 'lab.field', 'lab.reason'].map(k => el('th', { scope: 'col' }, t(k))))),
     el('tbody', {}, problems.map(p => el('tr', { class: 'problem-row' },
-      el('td', {}, p.row || t('lab.wholeBatch')),
+      el('td', {}, rowName(p.row)),
       el('td', {}, el('pre', { class: 'row-text' }, rowText(p.row, text, csv))),
       el('td', {}, p.field || ''),
       el('td', {}, p.reason))))));
