@@ -82,6 +82,8 @@ public static class RouteTable
             async s => Send(HttpMethod.Post, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/interpretation")),
 
         ["GET /api/reports/summary"] = Allow([Roles.Health], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/reports/summary?groupBy=area")),
+        ["GET /api/reports/summary/chart"] = Allow([Roles.Health], HttpStatusCode.OK,
+            _ => Send(HttpMethod.Get, "/api/reports/summary/chart?chart=lead-bands&groupBy=area")),
 
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["* /api/admin/metrics"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/metrics")),
