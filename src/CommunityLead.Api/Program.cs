@@ -9,6 +9,7 @@ using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Features.Reports;
+using CommunityLead.Api.Features.Results;
 using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Interpretation;
@@ -60,6 +61,7 @@ app.MapInterpretation();
 app.MapLetters();
 app.MapAttention();
 app.MapReports();
+app.MapResults();
 app.MapAdmin();
 app.MapWording();
 

@@ -85,6 +85,12 @@ public static class RouteTable
         ["GET /api/reports/summary/chart"] = Allow([Roles.Health], HttpStatusCode.OK,
             _ => Send(HttpMethod.Get, "/api/reports/summary/chart?chart=lead-bands&groupBy=area")),
 
+        // Open to anyone (a household has no key); with a made-up code and secret every caller gets the same 404.
+        ["POST /api/results/"] = RouteExpectation.Open(HttpStatusCode.NotFound,
+            _ => Send(HttpMethod.Post, "/api/results", new { code = "7KQ4-M2XD-H", secret = "AAAAA-AAAAA" })),
+        ["POST /api/results/letter"] = RouteExpectation.Open(HttpStatusCode.NotFound,
+            _ => Send(HttpMethod.Post, "/api/results/letter", new { code = "7KQ4-M2XD-H", secret = "AAAAA-AAAAA" })),
+
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["* /api/admin/metrics"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/metrics")),
         ["GET /api/admin/audit"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/audit?pageSize=10")),

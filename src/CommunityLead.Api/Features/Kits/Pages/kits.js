@@ -4,7 +4,7 @@
 import { startPage, report, t, problemText } from '/ui/shell.js';
 import { api, ApiError, download } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
-import { formatDate } from '/ui/i18n.js';
+import { formatDate, formatNumber } from '/ui/i18n.js';
 import { nowWithOffset } from '/ui/times.js';
 
 const STATES = ['issued', 'collected', 'received', 'analyzed', 'interpreted', 'letter-sent', 'closed', 'cancelled', 'lost', 'rejected'];
@@ -84,7 +84,7 @@ function kitView(kit) {
     kit.flags.length ? el('ul', { class: 'reasons' }, kit.flags.map(f => el('li', {}, el('span', { class: `tag ${f.severity}` }, f.severity), ' ', f.message))) : null,
     kit.samples.length ? el('ul', { class: 'reasons' }, kit.samples.map(s => el('li', {},
       t(`bottle.${s.bottle}`), s.position ? ` ${s.position}` : '', ' · ', formatDate(s.collectedAt),
-      s.standingMinutes != null ? ` · ${t('kits.standing', { hours: (s.standingMinutes / 60).toFixed(1) })}` : ''))) : null,
+      s.standingMinutes != null ? ` · ${t('kits.standing', { hours: formatNumber(s.standingMinutes / 60, 1) })}` : ''))) : null,
     hasLetter ? el('div', {},
       el('button', { type: 'button', class: 'quiet', onclick: async () => {
         try {

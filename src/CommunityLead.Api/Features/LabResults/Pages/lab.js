@@ -4,6 +4,7 @@ import { startPage, report, t } from '/ui/shell.js';
 import { api, ApiError } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
 import { withOffset } from '/ui/times.js';
+import { formatNumber } from '/ui/i18n.js';
 
 function isCsv(file) { return /\.csv$/i.test(file.name) || file.type === 'text/csv'; }
 
@@ -49,7 +50,7 @@ function showOutcome(batch) {
       el('thead', {}, el('tr', {}, ['lab.qcCheck', 'lab.qcValue', 'lab.qcWindow', 'lab.qcPassed'].map(k => el('th', { scope: 'col' }, t(k))))),
       el('tbody', {}, checks.map(c => el('tr', {},
         el('td', {}, `${c.type ?? ''} ${c.analyte ?? ''} ${c.figure ?? ''}`.trim()),
-        el('td', { class: 'num' }, c.value ?? ''),
+        el('td', { class: 'num' }, typeof c.value === 'number' ? formatNumber(c.value, 2) : ''),
         el('td', {}, c.low != null || c.high != null ? `${c.low ?? '—'} – ${c.high ?? '—'}` : ''),
         el('td', {}, c.passed ? t('lab.yes') : t('lab.no'))))))) : null);
   byId('outcome').hidden = false;
