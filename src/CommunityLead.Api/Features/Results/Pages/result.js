@@ -18,7 +18,7 @@ function show(result) {
       el('thead', {}, el('tr', {}, result.results.headers.map(h => el('th', { scope: 'col' }, h)))),
       el('tbody', {}, result.results.rows.map(r => el('tr', {}, r.map(c => el('td', {}, c))))))) : null,
     result.results?.note ? el('p', { class: 'hint' }, result.results.note) : null,
-    result.sections.map(s => el('section', {},
+    ...result.sections.map(s => el('section', {},
       el('h3', {}, s.heading),
       s.numbered ? el('ol', {}, s.paragraphs.map(p => el('li', {}, p))) : s.paragraphs.map(p => el('p', {}, p)))),
     el('p', {}, result.closing),
