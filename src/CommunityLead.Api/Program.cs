@@ -10,6 +10,7 @@ using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Features.Letters;
 using CommunityLead.Api.Features.Operations;
 using CommunityLead.Api.Features.Reports;
+using CommunityLead.Api.Features.Results;
 using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Api.Infrastructure.OpenApi;
@@ -44,6 +45,7 @@ if (app.Services.GetRequiredService<IOptions<DatabaseOptions>>().Value.MigrateOn
 
 app.UseForwardedHeaders();
 app.UseSecurityHeaders();
+app.UseCommunityLeadPages();
 app.UseExceptionHandler();
 app.UseStatusCodePages();
 app.Use(NoNulText.InQueryAsync);
@@ -62,6 +64,7 @@ app.MapInterpretation();
 app.MapLetters();
 app.MapAttention();
 app.MapReports();
+app.MapResults();
 app.MapAdmin();
 app.MapWording();
 

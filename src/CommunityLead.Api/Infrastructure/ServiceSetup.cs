@@ -27,6 +27,8 @@ public static class ServiceSetup
         services.AddHostedService(sp => sp.GetRequiredService<InterpretationSweep>());
         services.AddSingleton<ILetterLayout, PdfLetterLayout>();
         services.AddScoped<LetterIssuing>();
+        services.AddSingleton<Features.Results.ResultSecrets>();
+        services.AddSingleton<Features.Results.ResultThrottle>();
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
         // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
         services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);

@@ -83,6 +83,14 @@ public static class SettingsChecks
             p.Check(TimeZoneInfo.TryFindSystemTimeZoneById(s.TimeZone ?? "", out _), nameof(s.TimeZone),
                 "must be an IANA time zone id (like America/Chicago)", s.TimeZone));
         services.AddSingleton<ProgramCalendar>();
+        Add<Features.Results.ResultAccessOptions>(services, configuration, Features.Results.ResultAccessOptions.Section, (s, p) =>
+        {
+            p.Check(s.SecretKey is null || s.SecretKey.Length >= 32, nameof(s.SecretKey), "must be at least 32 characters (a random string)", "(not shown)");
+            p.Check(s.PageAddress is null || Uri.TryCreate(s.PageAddress, UriKind.Absolute, out _), nameof(s.PageAddress),
+                "must be an absolute address (like https://tapcheck.example.org/ui/result/)", s.PageAddress);
+            p.AtLeast(s.LookupsPerAddress, 1, nameof(s.LookupsPerAddress));
+            p.Positive(s.Window, nameof(s.Window));
+        });
         Add<SwaggerOptions>(services, configuration, SwaggerOptions.Section, (_, _) => { });
         Add<DatabaseOptions>(services, configuration, "Database", (_, _) => { });
         services.AddSingleton(_ => ReadLetters(configuration));

@@ -38,6 +38,8 @@ public static class RouteTable
         ["POST /api/kits/"] = Coordinator(HttpStatusCode.Created,
             async s => Send(HttpMethod.Post, "/api/kits", new { householdId = await s.HouseholdAsync(), kind = "water" })),
         ["GET /api/kits/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/kits?state=issued&page=1")),
+        ["GET /api/kits/labels"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/kits/labels?codes={await s.KitAsync()}&stock=a4-21")),
         ["GET /api/kits/{code}"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/kits/{await s.KitAsync()}")),
         ["POST /api/kits/{code}/collection"] = Coordinator(HttpStatusCode.OK,
@@ -69,6 +71,7 @@ public static class RouteTable
         ["POST /api/lab/mdl"] = Allow([Roles.Coordinator, Roles.Lab], HttpStatusCode.OK, _ => Send(HttpMethod.Post, "/api/lab/mdl",
             new { spiked = new[] { 1.1, 0.9, 1.0, 1.2, 0.95, 1.05, 1.0 } })),
         ["GET /api/attention/"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/attention")),
+        ["GET /api/attention/kits"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/attention/kits")),
         ["POST /api/attention/{id:int}/resolve"] = Coordinator(HttpStatusCode.NoContent,
             async s => Send(HttpMethod.Post, $"/api/attention/{await s.AttentionItemAsync()}/resolve", new { note = "called; filter offered" })),
 
@@ -88,6 +91,14 @@ public static class RouteTable
             async s => Send(HttpMethod.Post, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/interpretation")),
 
         ["GET /api/reports/summary"] = Allow([Roles.Health], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/reports/summary?groupBy=area")),
+        ["GET /api/reports/summary/chart"] = Allow([Roles.Health], HttpStatusCode.OK,
+            _ => Send(HttpMethod.Get, "/api/reports/summary/chart?chart=lead-bands&groupBy=area")),
+
+        // Open to anyone (a household has no key); with a made-up code and secret every caller gets the same 404.
+        ["POST /api/results/"] = RouteExpectation.Open(HttpStatusCode.NotFound,
+            _ => Send(HttpMethod.Post, "/api/results", new { code = "7KQ4-M2XD-H", secret = "AAAAA-AAAAA" })),
+        ["POST /api/results/letter"] = RouteExpectation.Open(HttpStatusCode.NotFound,
+            _ => Send(HttpMethod.Post, "/api/results/letter", new { code = "7KQ4-M2XD-H", secret = "AAAAA-AAAAA" })),
 
         ["GET /api/admin/keys"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/keys")),
         ["* /api/admin/metrics"] = Allow([Roles.Admin], HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/admin/metrics")),

@@ -72,6 +72,7 @@ internal static class ColumnDecisions
         new Bounded("Kit.Code", 16, "a new kit code", () => KitCode.NewCode().Length),
         new Bounded("Kit.ReplacesCode", 16, "a kit's code (the demo's parsed too)", () => MaxLength("Kit.Code")),
         new Bounded("Kit.ReplacedByCode", 16, "a kit's code", () => MaxLength("Kit.Code")),
+        new Bounded("Kit.ResultSecretHash", 64, "a SHA-256 in hex", () => Api.Features.Results.ResultSecrets.Hash("K7QD2-M9XAT").Length),
         new Composed("KitFlag.Message", 300, "bottle names, hours and positions 1 to 30 (SampleValidator)",
             nameof(CollectionFlagMessageLengthTests.Flags_WorstCaseWording_FitsTheMessageColumn)),
         new Bounded("Collection.RecordedBy", 100, "an actor's label", ActorLabel),

@@ -16,6 +16,7 @@ public class KitConfiguration : IEntityTypeConfiguration<Kit>
         b.Property(k => k.StateReason).HasMaxLength(500);
         b.Property(k => k.ReplacesCode).HasMaxLength(16);
         b.Property(k => k.ReplacedByCode).HasMaxLength(16);
+        b.Property(k => k.ResultSecretHash).HasMaxLength(64);
         b.Property(k => k.Version).IsConcurrencyToken();
         b.HasMany(k => k.Collections).WithOne().HasForeignKey(c => c.KitId).OnDelete(DeleteBehavior.Restrict);
     }

@@ -29,6 +29,11 @@ public class Kit
     public Band? Band { get; set; }
     public Band? LeadBand { get; set; }
     public Band? CopperBand { get; set; }
+    /// <summary>
+    /// SHA-256 of the secret printed on the kit's letters (ResultSecrets), set when a letter is issued while the
+    /// household result page is on; null until then, and a lookup for the kit then matches nothing.
+    /// </summary>
+    public string? ResultSecretHash { get; set; }
     /// <summary>Bumped on every change so two people moving the same kit at once can't both win.</summary>
     public int Version { get; set; }
     public List<Collection> Collections { get; set; } = [];

@@ -15,6 +15,9 @@ public sealed record ResolveRequest(string? Note);
 public static class AttentionEndpoints
 {
     // GET  /api/attention                 kits needing a person, most urgent first     coordinator
+    //                                     (one entry per reason)
+    // GET  /api/attention/kits            the same, one entry per kit with all its       coordinator
+    //                                     reasons and the household's name and phone
     // POST /api/attention/{id}/resolve    done, with a note (e.g. "called, filter given")  coordinator
     //                                     (for urgent and implausible items: releases the kit's letter)
     public static void MapAttention(this IEndpointRouteBuilder app)
@@ -22,7 +25,9 @@ public static class AttentionEndpoints
         var group = app.MapGroup("/api/attention").WithTags("Attention")
             .RequireAuthorization(Policies.Coordinator).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
-        group.MapGet("/", List).WithName("listAttention").WithSummary("Kits needing a person, most urgent first");
+        group.MapGet("/", List).WithName("listAttention").WithSummary("Kits needing a person, most urgent first (one item per reason)");
+        group.MapGet("/kits", AttentionByKit.List).WithName("listAttentionByKit")
+            .WithSummary("Kits needing a person, one row per kit with every reason, the household's name and phone");
         group.MapPost("/{id:int}/resolve", Resolve).WithName("resolveAttention")
             .WithSummary("Mark an item done, with a note (for urgent items this releases the letter)")
             .ProducesValidationProblem().ProducesProblem(StatusCodes.Status404NotFound);

@@ -1,4 +1,5 @@
 using CommunityLead.Api.Auth;
+using CommunityLead.Api.Features.Kits.Labels;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Api.Infrastructure.OpenApi;
 
@@ -8,6 +9,7 @@ public static class KitEndpoints
 {
     // POST /api/kits                        issue a kit to a household          coordinator
     // GET  /api/kits?state=&householdId=    the work queue                      coordinator
+    // GET  /api/kits/labels?codes=&stock=   a PDF sheet of labels (letter-30, a4-21)  coordinator
     // GET  /api/kits/{code}                 one kit (lab: without household)    coordinator, lab
     // POST /api/kits/{code}/collection      record the bottles                  coordinator
     // POST /api/kits/{code}/receipt         the kit arrived                     coordinator, lab
@@ -24,6 +26,9 @@ public static class KitEndpoints
             .ProducesProblem(StatusCodes.Status404NotFound);
         coordinator.MapGet("/", KitQueries.List).WithName("listKits").WithSummary("The work queue: kits by state or household")
             .WithQuery<CommunityLead.Rules.Kits.KitState>("state", "Only kits in this state");
+        coordinator.MapGet("/labels", KitLabels.Sheet).WithName("kitLabels")
+            .WithSummary("A PDF sheet of kit labels: code as text, Code 128 and QR, and the bottles")
+            .Produces(StatusCodes.Status200OK, contentType: "application/pdf");
         coordinator.MapPost("/{code}/collection", CollectionRecording.Record).WithName("recordCollection")
             .WithSummary("Record how and when the household took its samples").KitMove();
         coordinator.MapPost("/{code}/cancel", KitMoves.Cancel).WithName("cancelKit").WithSummary("Cancel a kit with a reason").KitMove();

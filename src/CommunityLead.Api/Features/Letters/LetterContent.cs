@@ -21,6 +21,8 @@ public enum PaperSize { Letter, A4 }
 /// <param name="Greeting">"Dear Ana Quill," above the results; null in letters stored before letters had one.</param>
 /// <param name="Signature">Who signs, after the closing line; null in letters stored before letters were signed.</param>
 /// <param name="ScaleNote">One line under the scales saying how to read a broken bar; null when no bar is broken.</param>
+/// <param name="OnlineLine">Where to see the result online, with "{secret}" where the kit's secret goes; null when the
+/// household result page is off (and in letters stored before it existed).</param>
 public sealed record LetterContent(
     LetterLanguage Language,
     LetterKind Kind,
@@ -40,7 +42,13 @@ public sealed record LetterContent(
     string Footer,
     string? Greeting = null,
     LetterSignature? Signature = null,
-    string? ScaleNote = null);
+    string? ScaleNote = null,
+    string? OnlineLine = null)
+{
+    /// <summary>The kit's secret for <see cref="OnlineLine"/>, set before each rendering and never stored.</summary>
+    [System.Text.Json.Serialization.JsonIgnore]
+    public string? ResultSecret { get; init; }
+}
 
 /// <summary>The sender block: program name, postal address lines, and how to reach it.</summary>
 public sealed record ProgramBlock(string Name, IReadOnlyList<string> AddressLines, IReadOnlyList<string> ContactLines);

@@ -9,6 +9,7 @@ using CommunityLead.Api.Features.Letters.Composing;
 using CommunityLead.Api.Features.Wording;
 using CommunityLead.Api.Features.Letters.Layout;
 using CommunityLead.Api.Features.Operations;
+using CommunityLead.Api.Features.Results;
 using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using Microsoft.AspNetCore.Http.Json;
@@ -26,7 +27,7 @@ public sealed record RenderedLetter(IssuedLetter Record, byte[] Pdf);
 /// Works on many kits at once for a mailing.
 /// </summary>
 public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, ILetterLayout layout, LetterSettings settings,
-    IOptions<JsonOptions> json, TimeProvider clock, ProgramCalendar calendar)
+    IOptions<JsonOptions> json, TimeProvider clock, ProgramCalendar calendar, ResultSecrets secrets)
 {
     private JsonSerializerOptions Json => json.Value.SerializerOptions;
 
@@ -90,6 +91,13 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
             letters.Add(new RenderedLetter(record, file.Pdf));
         }
         await db.SaveChangesAsync(ct);
+        // The secret printed on these letters is what the household result page checks, by its hash only.
+        foreach (var draft in drafts.Where(d => d.Content.OnlineLine is not null))
+        {
+            var hash = ResultSecrets.Hash(secrets.For(draft.KitCode));
+            await db.Kits.Where(k => k.Id == draft.KitId && k.ResultSecretHash != hash)
+                .ExecuteUpdateAsync(k => k.SetProperty(x => x.ResultSecretHash, hash), ct);
+        }
         ServiceMetrics.LettersIssued(newlyIssued);
         return letters;
     }
@@ -161,11 +169,24 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
                     household.Address.Region, household.Address.PostalCode),
                 lang, kind, kit.Code, collected, today, household.WaterSource == WaterSource.PrivateWell,
                 household.ChildUnder6 || household.Pregnant, settings, levels);
+            if (secrets.Enabled)
+                content = content with
+                {
+                    OnlineLine = lang == LetterLanguage.Es ? LetterWords.Online(secrets.PageAddress!, kit.Code).Es : LetterWords.Online(secrets.PageAddress!, kit.Code).En,
+                    ResultSecret = secrets.For(kit.Code),
+                };
             drafts.Add(new Draft(kit.Id, kit.Code, stored, lang, kind, collected, content));
         }
         return drafts;
     }
 
     /// <summary>Renders a stored letter again from its recorded content; the bytes must match the recorded hash.</summary>
-    public byte[] Rerender(IssuedLetter letter) => layout.Render(JsonSerializer.Deserialize<LetterContent>(letter.ContentJson, Json)!);
+    public byte[] Rerender(IssuedLetter letter) => layout.Render(Read(letter));
+
+    /// <summary>A stored letter's content, with the kit's secret put back when the letter prints one.</summary>
+    public LetterContent Read(IssuedLetter letter)
+    {
+        var content = JsonSerializer.Deserialize<LetterContent>(letter.ContentJson, Json)!;
+        return content.OnlineLine is null || !secrets.Enabled ? content : content with { ResultSecret = secrets.For(letter.KitCode) };
+    }
 }

@@ -11,6 +11,8 @@ namespace CommunityLead.Api.Features.Reports;
 public static class ReportEndpoints
 {
     // GET /api/reports/summary?from=&to=&areaCode=&waterSource=&ageBand=&serviceLine=&groupBy=&format=csv   health
+    // GET /api/reports/summary/chart?chart=lead-bands|share-at-action-level&lang=es&(the same filters)      health
+    //     the same summary drawn as SVG (SummaryChart)
     public static void MapReports(this IEndpointRouteBuilder app)
     {
         var group = app.MapGroup("/api/reports").WithTags("Reports")
@@ -27,6 +29,9 @@ public static class ReportEndpoints
             .WithQuery<CommunityLead.Rules.Households.ServiceLineMaterial>("serviceLine", "Only homes with this service line")
             .WithQuery<SummaryGrouping>("groupBy", "What the rows are (area by default)")
             .WithQuery<string>("format", "json (default) or csv");
+        group.MapGet("/summary/chart", Chart).WithName("getSummaryChart")
+            .WithSummary("The summary drawn as SVG; hidden groups hatched, never drawn as zero")
+            .Produces(StatusCodes.Status200OK, contentType: "image/svg+xml");
     }
 
     /// <summary>Aggregates only: no route of this group returns a row about one home.</summary>
@@ -42,5 +47,20 @@ public static class ReportEndpoints
         return request.Csv
             ? TypedResults.Text(SummaryCsv.Write(report), "text/csv", Encoding.UTF8)
             : TypedResults.Ok(report);
+    }
+
+    public static async Task<Results<ContentHttpResult, ValidationProblem>> Chart(
+        HttpContext http, CommunityLeadDb db, IOptions<ReportOptions> options, CancellationToken ct)
+    {
+        var chart = http.Request.Query["chart"].ToString();
+        if (chart is not ("lead-bands" or "share-at-action-level"))
+            return Problems.Field("chart", "Use chart=lead-bands or chart=share-at-action-level.");
+        var (request, errors) = SummaryRequest.Parse(http.Request.Query);
+        if (request is null) return Problems.Fields(errors);
+        var kits = SummaryData.Kits(db, request);
+        var report = SummaryBuilder.Build(request, await SummaryData.CountAsync(kits, ct), await SummaryData.ValuesAsync(db, kits, ct), options.Value);
+        var spanish = http.Request.Query["lang"] == "es";
+        var svg = chart == "lead-bands" ? SummaryChart.LeadBands(report, spanish) : SummaryChart.ShareAtActionLevel(report, spanish);
+        return TypedResults.Text(svg, "image/svg+xml", Encoding.UTF8);
     }
 }

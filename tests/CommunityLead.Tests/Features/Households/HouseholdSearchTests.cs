@@ -44,4 +44,23 @@ public class HouseholdSearchTests
         Assert.Equal(1, found["total"]!.GetValue<int>());
         Assert.Equal("Ángela Núñez", found["items"]![0]!["name"]!.GetValue<string>());
     }
+
+    [Theory]
+    [InlineData("5550102234")]
+    [InlineData("555-010-2234")]
+    [InlineData("(555) 010 2234")]
+    [InlineData("0102234")]
+    public async Task Search_PhoneAsReadOutOnACall_FoundWhateverItsFormatting(string typed)
+    {
+        using var app = new CommunityLeadFactory();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        await SignUpAsync(coordinator, h => { h["name"] = "Odile Marsh"; h["phone"] = "+1 (555) 010-2234"; });
+        await SignUpAsync(coordinator, h => { h["name"] = "Pim Rooker"; h["phone"] = "+1 555 0199"; });
+
+        var found = await GetAsync(coordinator, $"/api/households?search={Uri.EscapeDataString(typed)}");
+
+        Assert.Equal(1, found["total"]!.GetValue<int>());
+        Assert.Equal("Odile Marsh", found["items"]![0]!["name"]!.GetValue<string>());
+        Assert.Equal("+1 (555) 010-2234", found["items"]![0]!["phone"]!.GetValue<string>());
+    }
 }

@@ -492,6 +492,10 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                         .HasMaxLength(16)
                         .HasColumnType("character varying(16)");
 
+                    b.Property<string>("ResultSecretHash")
+                        .HasMaxLength(64)
+                        .HasColumnType("character varying(64)");
+
                     b.Property<string>("State")
                         .IsRequired()
                         .HasMaxLength(40)

@@ -70,6 +70,9 @@ internal static partial class LetterPhrases
         yield return Fixed("letter-words.corrected", LetterWordsFile, LetterWords.Corrected, "First paragraph of a corrected-result letter (in place of letter.corrected).");
         yield return Filled("letter-words.table-note", LetterWordsFile, LetterWords.TableNote, "{profileName}", "US federal, Lead and Copper Rule Improvements",
             "Under the results table, every results letter: names the rule profile (in the letter's language).");
+        yield return Filled("letter-words.online", LetterWordsFile, p => LetterWords.Online(p.Address, p.Kit), (Address: "{pageAddress}", Kit: "{kitCode}"),
+            (Address: "tapcheck.org", Kit: "7KQ4-M2XD-H"),
+            "Under the kit facts of every letter issued while the household result page is on (ResultAccess settings); {secret} is the kit's secret.");
         yield return Filled("letter-words.footer", LetterWordsFile, p => LetterWords.Footer(p.Program, p.Kit), (Program: "{programName}", Kit: "{kitCode}"),
             (Program: "Brindle Cove Tap Check", Kit: "7KQ4-M2XD-H"), "Footer of every page.");
         yield return Filled("letter-words.greeting", LetterWordsFile, LetterWords.Greeting, "{name}", "Rosa Quill",

@@ -62,6 +62,14 @@ internal static class LetterWords
         "A bar with // is cut there so a very high result fits. After the cut, the bar is not drawn to size.",
         "Una barra con // está cortada ahí para que quepa un resultado muy alto. Después del corte, la barra no está a escala.");
 
+    /// <summary>
+    /// Where the household can see its result online. "{secret}" stays a placeholder in the stored letter: the
+    /// layout fills it at each rendering (ResultSecrets), so no secret is ever stored in plain text.
+    /// </summary>
+    public static Phrase Online(string address, string kitCode) => new(
+        $"You can also see this result on a phone. Go to {address}. Type the kit code {kitCode} and the secret code {{secret}}. Keep this letter. The secret code is only here.",
+        $"Puede ver el resultado en su celular. Vaya a {address}. Ponga el código {kitCode} y la clave {{secret}}. Guarde esta carta. La clave solo está aquí.");
+
     public static Phrase Footer(string programName, string kitCode) =>
         new($"{programName} · Kit code {kitCode}", $"{programName} · Código del kit {kitCode}");
 }

@@ -17,6 +17,9 @@ internal static class LetterBody
 
         blocks.AddRange(KeptTogether(ParagraphBlocks.Lines(measure, content.Title, fonts.Title, Palette.Ink, x, width, 0)));
         blocks.AddRange(KitFactBlocks.Build(measure, fonts, content.KitFacts, x, width, spaceBefore: spacing.AfterTitle));
+        if (content.OnlineLine is { } online)
+            blocks.AddRange(KeptTogether(ParagraphBlocks.Lines(measure, online.Replace("{secret}", content.ResultSecret ?? "—"),
+                fonts.Body, Palette.Ink, x, width, spacing.Greeting)));
         if (!string.IsNullOrWhiteSpace(content.Greeting))
             blocks.AddRange(KeptTogether(ParagraphBlocks.Lines(measure, content.Greeting, fonts.Body, Palette.Ink, x, width, spacing.Greeting)));
         if (content.Results is { } table)

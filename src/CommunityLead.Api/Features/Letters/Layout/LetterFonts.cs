@@ -33,6 +33,13 @@ internal sealed class LetterFonts
     /// <summary>A regular face at another size, for text that must shrink to fit a fixed box (the envelope window).</summary>
     public static XFont Sized(double size) => Make(size, XFontStyleEx.Regular);
 
+    /// <summary>A bold face at another size (kit labels: the code printed as text).</summary>
+    public static XFont SizedBold(double size)
+    {
+        _ = Shared; // installs the font resolver first
+        return Make(size, XFontStyleEx.Bold);
+    }
+
     private static XFont Make(double size, XFontStyleEx style) => new(LetterFontResolver.FamilyName, size, style, Unicode);
 
     /// <summary>

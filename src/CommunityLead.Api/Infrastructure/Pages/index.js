@@ -1,0 +1,3 @@
+import { startPage } from './shell.js';
+
+startPage({ area: 'home', needsKey: false, run: async () => {} });

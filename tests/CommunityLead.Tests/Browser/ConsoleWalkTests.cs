@@ -1,0 +1,185 @@
+using System.Net.Http.Headers;
+using System.Net.Http.Json;
+using System.Text;
+using System.Text.RegularExpressions;
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Features.Kits.Labels;
+using CommunityLead.Tests.Features.Kits;
+using CommunityLead.Tests.Features.LabResults;
+using Microsoft.Playwright;
+using ZXing;
+using static CommunityLead.Tests.Infrastructure.Fixtures;
+
+namespace CommunityLead.Tests.Browser;
+
+/// <summary>
+/// The coordinator's and the lab's day in a real browser, against the service on a socket: sign-in, sign-up,
+/// a stale edit, a kit and its label (scanned back from the PDF), receipt by "scanner", a refused and then an
+/// accepted lab CSV, the urgent call on Today, the letter, and the same pages again in Spanish.
+/// </summary>
+public class ConsoleWalkTests
+{
+    [ChromiumFact]
+    public async Task Console_CoordinatorAndLabDay_WorksByKeyboardInBothLanguages()
+    {
+        await using var browser = await BrowserApp.StartAsync();
+        var page = browser.Page;
+        var coordinatorKey = browser.App.CreateKey(Roles.Coordinator);
+        var labKey = browser.App.CreateKey(Roles.Lab);
+        using var coordinator = Client(browser, coordinatorKey);
+
+        // Sign-in: the key lives in this tab's session storage only.
+        await page.GotoAsync("/ui/households/");
+        await browser.CheckAsync("01-sign-in-en");
+        await browser.SignInAsync(coordinatorKey);
+        await page.GetByRole(AriaRole.Button, new() { Name = "Sign up a household" }).ClickAsync();
+        Assert.Equal(coordinatorKey, await page.EvaluateAsync<string>("sessionStorage.getItem('communitylead.key')"));
+        Assert.Equal(0, await page.EvaluateAsync<int>("localStorage.length - (localStorage.getItem('communitylead.language') ? 1 : 0)"));
+        Assert.Empty(await browser.Context.CookiesAsync());
+
+        // Sign-up through the form, by label.
+        await page.GetByLabel("Name").FillAsync("Odile Marsh");
+        await page.GetByLabel("Phone").FillAsync("+1 (555) 010-2234");
+        await page.GetByLabel("Street address").FillAsync("7 Heron Quay");
+        await page.GetByLabel("City").FillAsync("Brindle Cove");
+        await page.GetByLabel("Postal code").FillAsync("00017");
+        await page.GetByLabel("Area code").FillAsync("harbor");
+        await page.GetByLabel("Service line").SelectOptionAsync("lead");
+        await page.GetByLabel("A child under 6 lives here").CheckAsync();
+        await page.GetByLabel("Consent form version").FillAsync("2026-01");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Save" }).ClickAsync();
+        await Expect(page.Locator("#form-status")).ToContainTextAsync("Signed up");
+        await browser.CheckAsync("02-household-signed-up-en");
+
+        // Someone else saves the same home meanwhile: our edit is refused and said so.
+        var found = await GetAsync(coordinator, "/api/households?search=5550102234");
+        var householdId = found["items"]![0]!["id"]!.GetValue<string>();
+        var changed = Household(h => { h["name"] = "Odile Marsh-Ferrand"; h["address"]!["line1"] = "7 Heron Quay"; h["areaCode"] = "harbor"; });
+        (await coordinator.PutAsJsonAsync($"/api/households/{householdId}", changed)).EnsureSuccessStatusCode();
+        await page.GetByLabel("Email").FillAsync("odile@example.org");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Save" }).ClickAsync();
+        await Expect(page.Locator("#form-status")).ToContainTextAsync("Someone changed this household meanwhile");
+        await browser.CheckAsync("03-household-stale-en");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Load their change" }).ClickAsync();
+        await Expect(page.GetByLabel("Name")).ToHaveValueAsync("Odile Marsh-Ferrand");
+
+        // Found again by the phone number as a caller reads it out; then a kit for it.
+        await page.GetByLabel("Find a household").FillAsync("555 0114");
+        await page.GetByLabel("Find a household").PressAsync("Enter");
+        await page.GetByRole(AriaRole.Link, new() { Name = "Issue a kit to Odile Marsh-Ferrand" }).ClickAsync();
+        await page.GetByRole(AriaRole.Button, new() { Name = "Issue the kit" }).ClickAsync();
+        await Expect(page.Locator("#issue-status")).ToContainTextAsync("is issued to Odile Marsh-Ferrand");
+        var code = Regex.Match(await page.Locator("#issue-status").InnerTextAsync(), @"[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]").Value;
+
+        // Its label, downloaded as the browser does, scanned back from the rendered PDF.
+        var download = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { Name = "Print its label" }).ClickAsync());
+        var labelFile = Path.Combine(BrowserApp.ScreenshotFolder, "kit-label.pdf");
+        await download.SaveAsAsync(labelFile);
+        var sheet = RenderedSheet.FirstPage(await File.ReadAllBytesAsync(labelFile), BrowserApp.ScreenshotFolder, "kit-label");
+        var stock = LabelStock.Letter30;
+        Assert.Equal(code, sheet.Decode(BarcodeFormat.CODE_128, stock.Left + stock.LabelWidth * 0.38, stock.Top, stock.LabelWidth * 0.62, stock.LabelHeight));
+        Assert.Equal(code, sheet.Decode(BarcodeFormat.QR_CODE, stock.Left, stock.Top, stock.LabelWidth * 0.42, stock.LabelHeight));
+
+        // The household fills the bottles; receipt by "scanner": a typo first, then the code, each followed by Enter.
+        await PostAsync(coordinator, $"/api/kits/{code}/collection", GoodWaterCollection(), System.Net.HttpStatusCode.OK);
+        var scan = page.GetByLabel("Kit code").First;
+        await scan.FocusAsync();
+        await scan.PressSequentiallyAsync(LabFixtures.Mistyped(code));
+        await scan.PressAsync("Enter");
+        await Expect(page.Locator("#receipt-status")).ToContainTextAsync("check character");
+        await scan.PressSequentiallyAsync(code.ToLowerInvariant());
+        await scan.PressAsync("Enter");
+        await Expect(page.Locator("#receipt-status")).ToHaveTextAsync($"Received {code}.");
+        Assert.Equal("assertive", await page.Locator("#receipt-status").GetAttributeAsync("aria-live"));
+        await browser.CheckAsync("04-kits-receipt-en");
+
+        // The lab, in a tab of its own: a bad CSV first (its problems beside its rows), then the corrected one.
+        await browser.NewContextAsync(1280, 900);
+        page = browser.Page;
+        await page.GotoAsync("/ui/lab/");
+        await browser.SignInAsync(labKey);
+        await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"));
+        await Expect(page.Locator("#problem-table")).ToContainTextAsync("Row 2");
+        await Expect(page.Locator("#problem-table pre").First).ToContainTextAsync("12O");
+        await browser.CheckAsync("05-lab-refused-en");
+        await PostCsvAsync(page, "good.csv", LabCsv(code, firstDraw: "120", unit: "ug/L"));
+        await Expect(page.Locator("#status")).ToContainTextAsync("was received");
+        await browser.CheckAsync("06-lab-accepted-en");
+
+        // Back as the coordinator: the urgent kit on Today, one card with every reason, name and phone; resolved in place.
+        await browser.NewContextAsync(1280, 900);
+        page = browser.Page;
+        await page.GotoAsync("/ui/today/");
+        await browser.SignInAsync(coordinatorKey);
+        var card = page.Locator("article.kit-card");
+        await Expect(card).ToHaveCountAsync(1);
+        await Expect(card).ToContainTextAsync("Odile Marsh-Ferrand");
+        await Expect(card).ToContainTextAsync("Urgent result");
+        await Expect(card.GetByRole(AriaRole.Link, new() { Name = "Call +1 555 0114" })).ToBeVisibleAsync();
+        await browser.CheckAsync("07-today-en");
+        await card.GetByLabel("What was done").FillAsync("Called; bottled water and a filter arranged.");
+        await card.GetByRole(AriaRole.Button, new() { Name = "Resolve" }).ClickAsync();
+        await Expect(page.Locator("#status")).ToContainTextAsync($"Kit {code}");
+        await Expect(card).ToHaveCountAsync(0);
+
+        // The released letter, downloaded and marked sent.
+        await page.GotoAsync($"/ui/kits/?code={code}");
+        var letter = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { Name = "Download the letter (PDF)" }).ClickAsync());
+        var letterFile = Path.Combine(BrowserApp.ScreenshotFolder, "letter.pdf");
+        await letter.SaveAsAsync(letterFile);
+        Assert.StartsWith("%PDF", Encoding.ASCII.GetString((await File.ReadAllBytesAsync(letterFile))[..4]));
+        await Expect(page.Locator("#lookup-status")).ToHaveTextAsync("The letter was downloaded.");
+        await page.GetByRole(AriaRole.Button, new() { Name = "Mark the letter sent" }).ClickAsync();
+        await Expect(page.Locator("#kit")).ToContainTextAsync("Letter sent");
+        await browser.CheckAsync("08-kit-letter-sent-en");
+
+        // The same pages in Spanish.
+        await page.GetByRole(AriaRole.Button, new() { Name = "Español" }).ClickAsync();
+        await Expect(page.Locator("h1")).ToHaveTextAsync("Kits");
+        Assert.Equal("es", await page.EvaluateAsync<string>("document.documentElement.lang"));
+        await browser.CheckAsync("09-kits-es");
+        await page.GotoAsync("/ui/today/");
+        await Expect(page.Locator("h1")).ToHaveTextAsync("Hoy");
+        await browser.CheckAsync("10-today-es");
+        await page.GotoAsync($"/ui/households/?id={householdId}");
+        await Expect(page.Locator("#form-title")).ToContainTextAsync("Editar");
+        await browser.CheckAsync("11-households-es");
+
+        // Signing out forgets the key.
+        await page.GetByRole(AriaRole.Button, new() { Name = "Cerrar sesión" }).ClickAsync();
+        await Expect(page.Locator("#sign-in")).ToBeVisibleAsync();
+        Assert.Null(await page.EvaluateAsync<string?>("sessionStorage.getItem('communitylead.key')"));
+
+        await page.GotoAsync("/ui/lab/");
+        await browser.SignInAsync(labKey);
+        await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), batchId: "WALK-ES");
+        await Expect(page.Locator("#problem-table")).ToContainTextAsync("Fila 2");
+        await browser.CheckAsync("12-lab-refused-es");
+        await page.GotoAsync("/ui/");
+        await browser.CheckAsync("13-home-es");
+    }
+
+    private static string LabCsv(string code, string firstDraw, string unit) => $"""
+        sampleType,kitCode,bottle,analyte,value,unit,mdl,reportingLimit,expected,measured
+        sample,{code},first-draw,lead,{firstDraw},{unit},0.3,1.0,,
+        sample,{code},flushed,lead,4.1,{unit},0.3,1.0,,
+        calibration-blank,,,lead,,ug/L,,,0,0.05
+        calibration-check,,,lead,,ug/L,,,10,9.8
+        """;
+
+    private static async Task PostCsvAsync(IPage page, string name, string csv, string batchId = "WALK-1")
+    {
+        await page.GetByLabel(new Regex("CSV")).First.SetInputFilesAsync(new FilePayload { Name = name, MimeType = "text/csv", Buffer = Encoding.UTF8.GetBytes(csv) });
+        await page.Locator("#batch-id").FillAsync(batchId);
+        await page.Locator("#analyzed-at").FillAsync("2026-04-05T10:00");
+        await page.Locator("#upload-form button[type=submit]").ClickAsync();
+    }
+
+    private static HttpClient Client(BrowserApp browser, string key) => new()
+    {
+        BaseAddress = new Uri(browser.Address),
+        DefaultRequestHeaders = { Authorization = new AuthenticationHeaderValue("Bearer", key) },
+    };
+
+    private static ILocatorAssertions Expect(ILocator locator) => Assertions.Expect(locator);
+}
