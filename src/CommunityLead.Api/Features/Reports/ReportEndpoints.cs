@@ -9,7 +9,7 @@ namespace CommunityLead.Api.Features.Reports;
 
 public static class ReportEndpoints
 {
-    // GET /api/reports/summary?from=&to=&areaCode=&waterSource=&ageBand=&serviceLine=&groupBy=&format=csv   health
+    // GET /api/reports/summary?from=&to=&kitKind=&areaCode=|waterSource=|ageBand=|serviceLine=&groupBy=&format=csv   health
     public static void MapReports(this IEndpointRouteBuilder app)
     {
         var group = app.MapGroup("/api/reports").WithTags("Reports")
@@ -24,10 +24,9 @@ public static class ReportEndpoints
     {
         var (request, errors) = SummaryRequest.Parse(http.Request.Query);
         if (request is null) return Problems.Fields(errors);
-        var kits = SummaryData.Kits(db, request);
-        var counts = await SummaryData.CountAsync(kits, ct);
-        var values = await SummaryData.ValuesAsync(db, kits, ct);
-        var report = SummaryBuilder.Build(request, counts, values, options.Value);
+        // Decided over the whole store on every call, so two instances (or two calls) never disagree on a cell.
+        var tables = SummaryTables.Protect(await ReportKits.LoadAsync(db, ct), options.Value);
+        var report = SummaryBuilder.Build(request, tables, options.Value);
         return request.Csv
             ? TypedResults.Text(SummaryCsv.Write(report), "text/csv", Encoding.UTF8)
             : TypedResults.Ok(report);
