@@ -98,6 +98,8 @@ public sealed partial class TableProtector
             // one so that a change hiding fewer cells wins among zeros.
             var cost = delta.Keys.Where(k => !hidden.Contains(k)).Sum(k => (long)counts.GetValueOrDefault(k) + 1);
             if (cost < bestCost) (best, bestCost) = (candidate, cost);
+            if (cost == 0) break; // hides nothing more: none can be cheaper
+
         }
         return best;
     }
@@ -125,10 +127,27 @@ public sealed partial class TableProtector
     private Dictionary<CellKey, int> Delta(IEnumerable<Change> changes)
     {
         var delta = new Dictionary<CellKey, int>();
+        void Add(TableRecord r, int sign, long node, int d)
+        {
+            foreach (var column in shape.ColumnsOfLeaf[r.Leaf])
+            {
+                var cell = new CellKey(node, d, d < 0 ? -1 : r.Values[d], column);
+                delta[cell] = delta.GetValueOrDefault(cell) + sign;
+            }
+        }
         foreach (var change in changes)
         {
-            if (change.Before is { } b) foreach (var cell in Cells(b)) delta[cell] = delta.GetValueOrDefault(cell) - 1;
-            if (change.After is { } a) foreach (var cell in Cells(a)) delta[cell] = delta.GetValueOrDefault(cell) + 1;
+            var before = change.Before is { } b ? PeriodNode.Of(b.Month) : null;
+            var after = change.After is { } a ? PeriodNode.Of(a.Month) : null;
+            for (var i = 0; i < 4; i++)
+                for (var d = -1; d < shape.DimensionSizes.Length; d++)
+                {
+                    // Most of a kit's cells are the same before and after a move: only the moved dimension changes.
+                    if (before is not null && after is not null && before[i] == after[i] && change.Before!.Leaf == change.After!.Leaf
+                        && (d < 0 || change.Before.Values[d] == change.After.Values[d])) continue;
+                    if (before is not null) Add(change.Before!, -1, before[i], d);
+                    if (after is not null) Add(change.After!, +1, after[i], d);
+                }
         }
         foreach (var zero in delta.Where(d => d.Value == 0).Select(d => d.Key).ToList()) delta.Remove(zero);
         return delta;
