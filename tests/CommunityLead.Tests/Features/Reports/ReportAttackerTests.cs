@@ -58,6 +58,7 @@ public class ReportAttackerTests(ITestOutputHelper output)
         Assert.Contains(protectedCells, c => c is { Dimension: "area", Value: ReportStore.SmallArea, Column: "issued" });
 
         output.WriteLine($"program built in {clock.Elapsed.TotalSeconds:0.0} s");
+        Assert.Equal(Google.OrTools.LinearSolver.Solver.ResultStatus.OPTIMAL, attacker.Feasible());
         var narrowest = double.PositiveInfinity;
         PublishedCell? worst = null;
         foreach (var cell in protectedCells)
