@@ -61,17 +61,29 @@ public class ReportAttackerTests(ITestOutputHelper output)
         Assert.Equal(Google.OrTools.LinearSolver.Solver.ResultStatus.OPTIMAL, attacker.Feasible());
         var narrowest = double.PositiveInfinity;
         PublishedCell? worst = null;
-        foreach (var cell in protectedCells)
+        // Two programs per hidden small count take about a tenth of a second each here, so the test attacks the
+        // small area's counts and the totals of the whole kind first, then the others in a fixed shuffled order,
+        // for as long as CI can spare (the count attacked is printed).
+        var order = protectedCells.OrderBy(c => c.Value == ReportStore.SmallArea ? 0 : c.Dimension.Length == 0 ? 1 : 2)
+            .ThenBy(c => StableHash(c)).ToList();
+        var budget = TimeSpan.FromSeconds(25);
+        var attack = Stopwatch.StartNew();
+        var attacked = 0;
+        foreach (var cell in order.TakeWhile(_ => attack.Elapsed < budget))
         {
+            attacked++;
             var (min, max) = attacker.Range(cell);
             Assert.InRange(Truth(cell), min - 1e-6, max + 1e-6); // the attacker's program is right about the truth
             if (max - min < narrowest) (narrowest, worst) = (max - min, cell);
         }
         output.WriteLine($"{queries.Count} queries sent ({answered} answered, the rest refused with 400); {published.Count} counts published, " +
-            $"{published.Count(p => p.Value.Suppressed)} hidden; {protectedCells.Count} hidden counts from 1 to {t} attacked; " +
+            $"{published.Count(p => p.Value.Suppressed)} hidden; {attacked} of {protectedCells.Count} hidden counts from 1 to {t} attacked; " +
             $"narrowest range {narrowest:0.###} (setting {options.MinimumHiddenRange}) at {worst}; {clock.Elapsed.TotalSeconds:0.0} s");
         Assert.True(narrowest >= options.MinimumHiddenRange - 1e-6, $"{worst} narrowed to a range of {narrowest}");
     }
+
+    private static int StableHash(PublishedCell c) => string.Join('|', c.Kind, c.Period, c.Dimension, c.Value, c.Column)
+        .Aggregate(17, (h, ch) => unchecked(h * 31 + ch));
 
     private static string KebabName<T>(T value) where T : struct, Enum => CommunityLead.Api.Infrastructure.KebabEnum.Name(value);
 }
