@@ -60,6 +60,7 @@ public static class SettingsChecks
         Add<ReportOptions>(services, configuration, "Reports", (s, p) =>
         {
             p.AtLeast(s.SuppressionThreshold, 0, nameof(s.SuppressionThreshold));
+            p.AtLeast(s.MinimumHiddenRange, 1, nameof(s.MinimumHiddenRange));
             p.Check(Enum.IsDefined(s.NinetiethRounding), nameof(s.NinetiethRounding),
                 $"must be one of {string.Join(", ", Enum.GetNames<Rules.Reports.NinetiethRounding>())}", s.NinetiethRounding);
         });

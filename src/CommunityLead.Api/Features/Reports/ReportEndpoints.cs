@@ -10,7 +10,7 @@ namespace CommunityLead.Api.Features.Reports;
 
 public static class ReportEndpoints
 {
-    // GET /api/reports/summary?from=&to=&areaCode=&waterSource=&ageBand=&serviceLine=&groupBy=&format=csv   health
+    // GET /api/reports/summary?from=&to=&kitKind=&areaCode=|waterSource=|ageBand=|serviceLine=&groupBy=&format=csv   health
     // GET /api/reports/summary/chart?chart=lead-bands|share-at-action-level&lang=es&(the same filters)      health
     //     the same summary drawn as SVG (SummaryChart)
     public static void MapReports(this IEndpointRouteBuilder app)
@@ -19,11 +19,12 @@ public static class ReportEndpoints
             .RequireAuthorization(Policies.Health).AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         group.MapGet("/summary", Summary).WithName("getSummary")
-            .WithSummary("Counts and statistics by area, period, age band, service line or band; small counts hidden")
+            .WithSummary("Counts and statistics by area, period, age band, service line, band or kit kind; small counts hidden")
             .Produces(StatusCodes.Status200OK, contentType: "text/csv").Produces<SummaryReport>(StatusCodes.Status200OK)
-            .WithQuery<DateOnly>("from", "First day of a month, e.g. 2026-04-01")
-            .WithQuery<DateOnly>("to", "Last day of a month, e.g. 2026-06-30")
-            .WithQuery<string>("areaCode", "Only this area")
+            .WithQuery<DateOnly>("from", "First day of one whole month, quarter or year, e.g. 2026-04-01 (with to)")
+            .WithQuery<DateOnly>("to", "Last day of that month, quarter or year, e.g. 2026-06-30 (with from)")
+            .WithQuery<ReportKitKind>("kitKind", "Water (the default) or soil: never counted together")
+            .WithQuery<string>("areaCode", "Only this area (at most one of areaCode, waterSource, ageBand, serviceLine)")
             .WithQuery<CommunityLead.Rules.Households.WaterSource>("waterSource", "Only homes on this water source")
             .WithQuery<string>("ageBand", "Only homes of this age: before-1950, 1950-1985, 1986-and-later or unknown")
             .WithQuery<CommunityLead.Rules.Households.ServiceLineMaterial>("serviceLine", "Only homes with this service line")
@@ -40,10 +41,9 @@ public static class ReportEndpoints
     {
         var (request, errors) = SummaryRequest.Parse(http.Request.Query);
         if (request is null) return Problems.Fields(errors);
-        var kits = SummaryData.Kits(db, request);
-        var counts = await SummaryData.CountAsync(kits, ct);
-        var values = await SummaryData.ValuesAsync(db, kits, ct);
-        var report = SummaryBuilder.Build(request, counts, values, options.Value);
+        // Decided over the whole store on every call, so two instances (or two calls) never disagree on a cell.
+        var tables = SummaryTables.Protect(await ReportKits.LoadAsync(db, ct), options.Value);
+        var report = SummaryBuilder.Build(request, tables, options.Value);
         return request.Csv
             ? TypedResults.Text(SummaryCsv.Write(report), "text/csv", Encoding.UTF8)
             : TypedResults.Ok(report);
@@ -57,8 +57,8 @@ public static class ReportEndpoints
             return Problems.Field("chart", "Use chart=lead-bands or chart=share-at-action-level.");
         var (request, errors) = SummaryRequest.Parse(http.Request.Query);
         if (request is null) return Problems.Fields(errors);
-        var kits = SummaryData.Kits(db, request);
-        var report = SummaryBuilder.Build(request, await SummaryData.CountAsync(kits, ct), await SummaryData.ValuesAsync(db, kits, ct), options.Value);
+        // The chart draws the same protected report as the table: a hidden cell stays hidden in both.
+        var report = SummaryBuilder.Build(request, SummaryTables.Protect(await ReportKits.LoadAsync(db, ct), options.Value), options.Value);
         var spanish = http.Request.Query["lang"] == "es";
         var svg = chart == "lead-bands" ? SummaryChart.LeadBands(report, spanish) : SummaryChart.ShareAtActionLevel(report, spanish);
         return TypedResults.Text(svg, "image/svg+xml", Encoding.UTF8);

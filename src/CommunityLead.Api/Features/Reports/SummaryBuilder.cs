@@ -1,98 +1,87 @@
 using CommunityLead.Api.Infrastructure;
-using CommunityLead.Rules.Reports;
+using CommunityLead.Rules.Reports.Protection;
+using static CommunityLead.Api.Features.Reports.ReportDimensions;
 
 namespace CommunityLead.Api.Features.Reports;
 
 /// <summary>
-/// Turns group counts and values into the published table. Small counts are suppressed, with complements so
-/// no hidden count can be worked back from row or column totals; a group's statistics are hidden whenever
-/// the counts behind them are.
+/// Answers one query from the protected table set: every row and the total are look-ups of cells decided once for
+/// the whole set, so no choice of filters or periods can show a different decision for the same cell.
 /// </summary>
 public static class SummaryBuilder
 {
-    public static SummaryReport Build(SummaryRequest request, IReadOnlyList<GroupCounts> groups,
-        IReadOnlyDictionary<string, GroupValues> values, ReportOptions options)
+    public static SummaryReport Build(SummaryRequest request, Dictionary<ReportKitKind, KindTable> tables, ReportOptions options)
     {
-        var t = options.SuppressionThreshold;
-        if (groups.Count == 0) groups = [new GroupCounts("none", 0, 0, 0, new int[6], new int[6])];
-        var lead = CellSuppression.Suppress([.. groups.Select(g => g.Lead)], t);
-        var copper = CellSuppression.Suppress([.. groups.Select(g => g.Copper)], t);
-        var issued = CellSuppression.Suppress([.. groups.Select(g => new[] { g.Issued })], t);
-        var returned = CellSuppression.Suppress([.. groups.Select(g => new[] { g.Returned })], t);
-        var child = CellSuppression.Suppress([.. groups.Select(g => new[] { g.ChildHomes })], t);
-
-        var rows = groups.Select((g, i) => Row(Label(request.GroupBy, g.Key), g, values.GetValueOrDefault(g.Key), options,
-            issued.Suppressed[i][0], returned.Suppressed[i][0], child.Suppressed[i][0], lead.RowTotalsSuppressed[i],
-            lead.Suppressed[i], copper.Suppressed[i])).ToList();
-
-        var sum = new GroupCounts("total", groups.Sum(g => g.Issued), groups.Sum(g => g.Returned), groups.Sum(g => g.ChildHomes),
-            [.. Enumerable.Range(0, 6).Select(j => groups.Sum(g => g.Lead[j]))], [.. Enumerable.Range(0, 6).Select(j => groups.Sum(g => g.Copper[j]))]);
-        var allValues = new GroupValues("total", [.. values.Values.SelectMany(v => v.FirstDrawLead)], [.. values.Values.SelectMany(v => v.DaysToLetter)]);
-        var total = Row("total", sum, allValues, options, issued.ColumnTotalsSuppressed[0], returned.ColumnTotalsSuppressed[0],
-            child.ColumnTotalsSuppressed[0], lead.GrandTotalSuppressed, lead.ColumnTotalsSuppressed, copper.ColumnTotalsSuppressed);
-
-        return new SummaryReport(KebabEnum.Name(request.GroupBy), t, "lead µg/L (first draw); days", rows, total,
-        [
-            $"Counts from 1 to {t} are hidden, and so are other cells where needed so that hidden counts cannot be worked out from totals.",
-            "The 90th percentile uses the method of 40 CFR 141.80(c)(3) and is informational only: the homes tested are volunteers, not a compliance sample.",
-            $"When 0.9 × n is not a whole number, the rank is found by: {KebabEnum.Name(options.NinetiethRounding)}.",
-            "Median and 75th percentile of lead treat results below the reporting limit as censored (Kaplan–Meier), never as half the limit.",
-            "Kits that were re-issued for the same home are counted once each.",
-        ]);
+        var seen = new HashSet<(ReportKitKind, CellKey)>();
+        List<SummaryRow> rows;
+        SummaryRow total;
+        if (request.GroupBy == SummaryGrouping.KitKind)
+        {
+            rows = [.. tables.Values.Select(kt => Row(KebabEnum.Name(kt.Kind), kt, Group(request, kt, request.Period), options, seen))];
+            total = NotAdded();
+        }
+        else
+        {
+            var kt = tables[request.Kind];
+            rows = [.. RowGroups(request, kt).Select(g => Row(g.Label, kt, g.Group, options, seen))];
+            total = Row("total", kt, Group(request, kt, request.Period), options, seen);
+        }
+        var kind = request.GroupBy == SummaryGrouping.KitKind ? "water, soil" : KebabEnum.Name(request.Kind);
+        return new SummaryReport(KebabEnum.Name(request.GroupBy), options.SuppressionThreshold, "lead µg/L (first draw); days", rows, total,
+            SummaryNotes.For(request, options))
+        {
+            KitKind = kind,
+            Period = SummaryPeriod.Label(request.Period),
+            Protection = SummaryNotes.Protection(tables, request, options, seen.Count(s => Hidden(tables, s)), seen.Count),
+        };
     }
 
-    private static SummaryRow Row(string label, GroupCounts g, GroupValues? v, ReportOptions options, bool issuedHidden, bool returnedHidden,
-        bool childHidden, bool analyzedHidden, bool[] leadHidden, bool[] copperHidden)
-    {
-        var t = options.SuppressionThreshold;
-        var analyzed = g.Lead.Sum();
-        var retest = g.Lead[5];
-        var leadCells = Cells(g.Lead, leadHidden);
-        // A statistic would reveal what the hidden cells hide: it goes when they do, or when too few homes are behind it.
-        bool TooFew(int n) => n >= 1 && n <= t;
-        var judged = analyzed - retest;
-        var shareHidden = analyzedHidden || leadHidden[3] || leadHidden[4] || leadHidden[5] || TooFew(judged);
-        ShareWithInterval? share = null;
-        if (!shareHidden && WilsonScore.Interval(g.Lead[3] + g.Lead[4], judged) is { } w)
-            share = new ShareWithInterval(w.Proportion, w.Low, w.High, judged);
+    private static bool Hidden(Dictionary<ReportKitKind, KindTable> tables, (ReportKitKind Kind, CellKey Key) s) => tables[s.Kind].Table.IsHidden(s.Key);
 
-        var leadValues = v?.FirstDrawLead ?? [];
-        var valuesHidden = analyzedHidden || TooFew(leadValues.Count);
-        Ninetieth? p90 = null;
-        LeadQuantile? median = null, p75 = null;
-        if (!valuesHidden && leadValues.Count > 0)
-        {
-            if (NinetiethPercentile.Compute([.. leadValues.Select(x => x.Value)], options.NinetiethRounding, options.FiveSampleRule) is { } n)
-                p90 = new Ninetieth(n.Value, n.SampleCount, n.Method, "informational");
-            var censored = leadValues.Select(x => new CensoredValue(x.Value, x.Below)).ToList();
-            median = Quantile(censored, 0.5);
-            p75 = Quantile(censored, 0.75);
-        }
-        var days = v?.DaysToLetter ?? [];
-        double? daysMedian = null, days90 = null;
-        if (!TooFew(days.Count) && days.Count > 0)
-        {
-            var sorted = days.Order().ToList();
-            daysMedian = sorted.Count % 2 == 1 ? sorted[sorted.Count / 2] : (sorted[sorted.Count / 2 - 1] + sorted[sorted.Count / 2]) / 2.0;
-            days90 = NinetiethPercentile.Compute([.. sorted.Select(d => (double)d)], options.NinetiethRounding, fiveSampleRule: false)?.Value;
-        }
-        var anyHidden = issuedHidden || returnedHidden || childHidden || analyzedHidden || leadHidden.Any(h => h) || copperHidden.Any(h => h);
-        return new SummaryRow(label, Cell.Of(g.Issued, issuedHidden), Cell.Of(g.Returned, returnedHidden), Cell.Of(analyzed, analyzedHidden),
-            leadCells.Retest, Cell.Of(g.ChildHomes, childHidden), leadCells, Cells(g.Copper, copperHidden),
-            share, p90, median, p75, daysMedian, days90, anyHidden);
+    private static (long Node, int Dimension, int Value) Group(SummaryRequest r, KindTable kt, long node) =>
+        r.Filter is { } f ? (node, f.Dimension, Array.IndexOf(kt.Values[f.Dimension], f.Value)) : (node, -1, -1);
+
+    private static IEnumerable<(string Label, (long, int, int) Group)> RowGroups(SummaryRequest r, KindTable kt)
+    {
+        // A group of nobody is left out, unless one of its zeros is hidden: leaving it out would show the zero.
+        bool Present((long Node, int D, int V) g) =>
+            Enumerable.Range(0, Shape.ColumnLeaves.Length).Any(c => kt.Table.Count(Key(g, c)) > 0 || kt.Table.IsHidden(Key(g, c)));
+        var level = SummaryPeriod.Level(r.GroupBy);
+        if (level >= 0)
+            return kt.Months.Where(m => PeriodNode.Contains(r.Period, m)).Select(m => PeriodNode.Of(m)[level]).Distinct()
+                .Select(node => (SummaryPeriod.Label(node), Group(r, kt, node))).Where(x => Present(x.Item2));
+        var d = Array.FindIndex(All, x => x.Grouping == r.GroupBy);
+        return kt.Values[d].Select((label, v) => (label, (r.Period, d, v)))
+            .Where(x => r.Filter is not { } f || (f.Dimension == d && f.Value == x.label)).Where(x => Present(x.Item2));
     }
 
-    private static LeadQuantile? Quantile(IReadOnlyList<CensoredValue> values, double p) =>
-        KaplanMeier.Quantile(values, p) is { } q ? new LeadQuantile(q.Value, q.IsUpperBound) : null;
+    private static CellKey Key((long Node, int D, int V) g, int column) => new(g.Node, g.D, g.V, column);
 
-    private static BandCells Cells(int[] counts, bool[] hidden) => new(
-        Cell.Of(counts[0], hidden[0]), Cell.Of(counts[1], hidden[1]), Cell.Of(counts[2], hidden[2]),
-        Cell.Of(counts[3], hidden[3]), Cell.Of(counts[4], hidden[4]), Cell.Of(counts[5], hidden[5]));
-
-    private static string Label(SummaryGrouping grouping, string key) => grouping switch
+    private static SummaryRow Row(string label, KindTable kt, (long Node, int D, int V) g, ReportOptions options, HashSet<(ReportKitKind, CellKey)> seen)
     {
-        SummaryGrouping.Month when key.Length == 6 => $"{key[..4]}-{key[4..]}",
-        SummaryGrouping.Quarter when key.Length == 5 => $"{key[..4]}-Q{key[4]}",
-        _ => key,
-    };
+        // A filter value no kit has: a group of nobody, all zeros (zeros may show).
+        var known = g.D < 0 || g.V >= 0;
+        Cell C(int column)
+        {
+            var key = Key(g, column);
+            if (!known) return Cell.Of(0, false);
+            seen.Add((kt.Kind, key));
+            return Cell.Of(kt.Table.Count(key), kt.Table.IsHidden(key));
+        }
+        Cell[] cells = [.. Enumerable.Range(0, Shape.ColumnLeaves.Length).Select(C)];
+        var anyHidden = cells.Any(c => c.Suppressed);
+        var stats = known && !anyHidden && kt.Table.KeptWhole(g.Node, g.D, g.V)
+            ? SummaryStatistics.Of([.. kt.Members(g.Node, g.D, g.V)], options) : GroupStatistics.None;
+        return new SummaryRow(label, cells[Issued], cells[Returned], cells[Analyzed], cells[7], null,
+            new BandCells(cells[2], cells[3], cells[4], cells[5], cells[6], cells[7]), null,
+            stats.Share, stats.P90, stats.Median, stats.P75, stats.DaysMedian, stats.Days90, anyHidden);
+    }
+
+    /// <summary>Water and soil kits are never added together, so grouping by kind has no total.</summary>
+    private static SummaryRow NotAdded()
+    {
+        var none = new Cell(null, true);
+        var bands = new BandCells(none, none, none, none, none, none);
+        return new SummaryRow("total", none, none, none, none, null, bands, null, null, null, null, null, null, null, true);
+    }
 }

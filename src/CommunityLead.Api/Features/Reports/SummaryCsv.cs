@@ -21,6 +21,16 @@ public static class SummaryCsv
         var text = new StringBuilder();
         Line(text, header);
         foreach (var row in report.Rows.Append(report.Total)) Line(text, Values(row));
+        // The data steward's lines after the table: what protects it and what it hides.
+        if (report.Protection is { } p)
+        {
+            Line(text, ["protection", p.Design]);
+            Line(text, ["suppressionThreshold", Number(p.SuppressionThreshold)]);
+            Line(text, ["minimumHiddenRange", Number(p.MinimumHiddenRange)]);
+            Line(text, ["hiddenInThisReport", $"{p.HiddenInThisReport} of {p.CountsInThisReport}"]);
+            Line(text, ["hiddenInProtectedSet", $"{p.HiddenInProtectedSet} of {p.CountsInProtectedSet}"]);
+            Line(text, ["explanation", p.Explanation]);
+        }
         return text.ToString();
     }
 
@@ -29,7 +39,7 @@ public static class SummaryCsv
         yield return r.Group;
         foreach (var c in new[] { r.KitsIssued, r.KitsReturned, r.KitsAnalyzed, r.KitsNeedingRetest, r.KitsFromHomesWithChildUnder6 }) yield return Cell(c);
         foreach (var bands in new[] { r.Lead, r.Copper })
-            foreach (var c in new[] { bands.NotDetected, bands.Low, bands.Advisory, bands.Action, bands.Urgent, bands.Retest }) yield return Cell(c);
+            foreach (var c in new[] { bands?.NotDetected, bands?.Low, bands?.Advisory, bands?.Action, bands?.Urgent, bands?.Retest }) yield return Cell(c);
         yield return Number(r.ShareAtOrAboveActionLevel?.Proportion);
         yield return Number(r.ShareAtOrAboveActionLevel?.Low95);
         yield return Number(r.ShareAtOrAboveActionLevel?.High95);
@@ -40,7 +50,8 @@ public static class SummaryCsv
         yield return Number(r.DaysToLetter90thPercentile);
     }
 
-    private static string Cell(Cell c) => c.Suppressed ? "suppressed" : c.Value!.Value.ToString(CultureInfo.InvariantCulture);
+    /// <summary>Blank where the count is not part of this table (copper bands, child homes: see their groupings).</summary>
+    private static string Cell(Cell? c) => c is null ? "" : c.Suppressed ? "suppressed" : c.Value!.Value.ToString(CultureInfo.InvariantCulture);
 
     private static string Number(double? v) => v?.ToString("0.####", CultureInfo.InvariantCulture) ?? "";
 

@@ -15,8 +15,10 @@ public static class ResultEndpoints
         var group = app.MapGroup("/api/results").WithTags("Household results").AllowAnonymous()
             .AddEndpointFilter<ValidationFilter>()
             .ProducesProblem(StatusCodes.Status404NotFound).ProducesProblem(StatusCodes.Status429TooManyRequests);
-        group.MapPost("/", ResultLookup.Result);
-        group.MapPost("/letter", ResultLookup.Letter).Produces(StatusCodes.Status200OK, contentType: "application/pdf");
+        group.MapPost("/", ResultLookup.Result).WithName("lookUpResult")
+            .WithSummary("A household's result in plain words, by its kit code and the secret printed on its letter");
+        group.MapPost("/letter", ResultLookup.Letter).WithName("downloadResultLetter")
+            .WithSummary("The household's letter, by its kit code and the secret printed on it").Produces(StatusCodes.Status200OK, contentType: "application/pdf");
     }
 }
 

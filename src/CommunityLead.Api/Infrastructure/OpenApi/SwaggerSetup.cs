@@ -39,6 +39,7 @@ public static class SwaggerSetup
         ("Reports", "Aggregate counts for the health department; never a row about one home"),
         ("Admin", "Keys and the audit trail"),
         ("Wording", "Every sentence the service can show a household, for review"),
+        ("Household results", "A household's own result and letter, by kit code and the secret on its letter (no key)"),
         ("Health", "Whether this instance can take work (no key needed)"),
     ];
 

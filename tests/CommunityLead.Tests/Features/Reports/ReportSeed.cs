@@ -12,7 +12,8 @@ namespace CommunityLead.Tests.Features.Reports;
 public static class ReportSeed
 {
     public sealed record SeedKit(string Area, Band LeadBand, double FirstDrawLead, bool Below = false, int? YearBuilt = 1960,
-        WaterSource Source = WaterSource.Public, bool Child = false, DateTime? CollectedUtc = null);
+        WaterSource Source = WaterSource.Public, bool Child = false, DateTime? CollectedUtc = null, KitKind Kind = KitKind.Water,
+        ServiceLineMaterial ServiceLine = ServiceLineMaterial.Unknown);
 
     public static void Add(CommunityLeadFactory app, IEnumerable<SeedKit> kits)
     {
@@ -32,14 +33,14 @@ public static class ReportSeed
                 var household = new Household
                 {
                     Id = Guid.NewGuid(), Name = "Seeded Home", ConsentVersion = "v1", AreaCode = s.Area, WaterSource = s.Source,
-                    YearBuilt = s.YearBuilt, ChildUnder6 = s.Child, ConsentGivenAt = now,
+                    YearBuilt = s.YearBuilt, ChildUnder6 = s.Child, ConsentGivenAt = now, ServiceLine = s.ServiceLine,
                     Address = new PostalAddress { Line1 = "1 Seed Row", City = "Brindle Cove", PostalCode = "00001" },
                     CreatedAtUtc = now, UpdatedAtUtc = now,
                 };
                 var collected = s.CollectedUtc ?? new DateTime(2026, 4, 3, 6, 0, 0, DateTimeKind.Utc);
                 var kit = new Kit
                 {
-                    Code = KitCode.NewCode(), Kind = KitKind.Water, State = KitState.Interpreted, Household = household,
+                    Code = KitCode.NewCode(), Kind = s.Kind, State = KitState.Interpreted, Household = household,
                     IssuedAtUtc = collected.AddDays(-3), UpdatedAtUtc = now, ReceivedAt = collected.AddDays(1),
                     CollectedAtUtc = collected, Band = s.LeadBand, LeadBand = s.LeadBand,
                 };
@@ -47,7 +48,8 @@ public static class ReportSeed
                 added.Add((kit, s, collected));
             }
             db.SaveChanges();
-            foreach (var (kit, s, collected) in added)
+            // Soil kits have no first draw: their results stay out of the water statistics.
+            foreach (var (kit, s, collected) in added.Where(a => a.Seed.Kind != KitKind.Soil))
                 batch.Results.Add(new LabResult
                 {
                     KitId = kit.Id, KitCode = kit.Code, Bottle = BottleType.FirstDraw, Analyte = Analyte.Lead, Value = s.FirstDrawLead, Unit = "µg/L",

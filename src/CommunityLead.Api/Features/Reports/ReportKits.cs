@@ -1,0 +1,48 @@
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Rules.Households;
+using CommunityLead.Rules.Interpretation;
+using CommunityLead.Rules.Kits;
+using CommunityLead.Rules.LabResults;
+using CommunityLead.Rules.Sampling;
+using Microsoft.EntityFrameworkCore;
+
+namespace CommunityLead.Api.Features.Reports;
+
+/// <summary>Soil and water kits are never counted together: each kind has its own protected table.</summary>
+public enum ReportKitKind { Water, Soil }
+
+/// <summary>One kit reduced to what a report may count, never its household's identity.</summary>
+public sealed record ReportKit(
+    ReportKitKind Kind, int PeriodMonth, string Area, WaterSource Source, int? YearBuilt, ServiceLineMaterial ServiceLine,
+    bool ChildUnder6, bool Returned, Band? Band, Band? LeadBand, Band? CopperBand,
+    IReadOnlyList<(double Value, bool Below)> FirstDrawLead, int? DaysToLetter);
+
+/// <summary>
+/// Reads every kit once per report: the protected table is decided over the whole store, so every answer is a look-up
+/// in the same set, whatever was asked before.
+/// </summary>
+public static class ReportKits
+{
+    public static async Task<List<ReportKit>> LoadAsync(CommunityLeadDb db, CancellationToken ct)
+    {
+        var kits = await db.Kits.AsNoTracking().Select(k => new
+        {
+            k.Id, k.Kind, k.PeriodMonth, k.Household!.AreaCode, k.Household.WaterSource, k.Household.YearBuilt, k.Household.ServiceLine,
+            k.Household.ChildUnder6, Returned = k.ReceivedAt != null, k.Band, k.LeadBand, k.CopperBand,
+        }).ToListAsync(ct);
+        // First-draw lead (sequential bottle 1 counts as the first draw) from results in effect.
+        var lead = (await db.LabResults.AsNoTracking()
+            .Where(r => r.SupersededAtUtc == null && r.Analyte == Analyte.Lead && r.Batch!.Status != BatchStatus.Held
+                        && (r.Bottle == BottleType.FirstDraw || (r.Bottle == BottleType.Sequential && r.Position == 1)))
+            .Select(r => new { r.KitId, r.Value, Below = r.Qualifier == "<" }).ToListAsync(ct))
+            .ToLookup(r => r.KitId, r => (r.Value, r.Below));
+        var days = await db.Letters.AsNoTracking().Where(l => l.DaysFromCollection != null)
+            .GroupBy(l => l.KitId).Select(g => new { KitId = g.Key, Days = g.Min(l => l.DaysFromCollection!.Value) })
+            .ToDictionaryAsync(d => d.KitId, d => d.Days, ct);
+        return [.. kits.OrderBy(k => k.Id).Select(k => new ReportKit(
+            k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, k.PeriodMonth, k.AreaCode, k.WaterSource, k.YearBuilt,
+            k.ServiceLine, k.ChildUnder6, k.Returned, k.Band, k.LeadBand, k.CopperBand,
+            [.. lead[k.Id]], days.TryGetValue(k.Id, out var d) ? d : null))];
+    }
+}
