@@ -32,5 +32,25 @@ namespace CommunityLead.LabClient.Api.Models
         #pragma warning disable CS1591
         Band,
         #pragma warning restore CS1591
+        [EnumMember(Value = "year")]
+        #pragma warning disable CS1591
+        Year,
+        #pragma warning restore CS1591
+        [EnumMember(Value = "water-source")]
+        #pragma warning disable CS1591
+        WaterSource,
+        #pragma warning restore CS1591
+        [EnumMember(Value = "copper-band")]
+        #pragma warning disable CS1591
+        CopperBand,
+        #pragma warning restore CS1591
+        [EnumMember(Value = "child-under-six")]
+        #pragma warning disable CS1591
+        ChildUnderSix,
+        #pragma warning restore CS1591
+        [EnumMember(Value = "kit-kind")]
+        #pragma warning disable CS1591
+        KitKind,
+        #pragma warning restore CS1591
     }
 }

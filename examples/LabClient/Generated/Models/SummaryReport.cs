@@ -20,6 +20,14 @@ namespace CommunityLead.LabClient.Api.Models
 #else
         public string GroupBy { get; set; }
 #endif
+        /// <summary>The kitKind property</summary>
+#if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
+#nullable enable
+        public string? KitKind { get; set; }
+#nullable restore
+#else
+        public string KitKind { get; set; }
+#endif
         /// <summary>The notes property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
 #nullable enable
@@ -27,6 +35,22 @@ namespace CommunityLead.LabClient.Api.Models
 #nullable restore
 #else
         public List<string> Notes { get; set; }
+#endif
+        /// <summary>The period property</summary>
+#if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
+#nullable enable
+        public string? Period { get; set; }
+#nullable restore
+#else
+        public string Period { get; set; }
+#endif
+        /// <summary>The protection property</summary>
+#if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
+#nullable enable
+        public global::CommunityLead.LabClient.Api.Models.SummaryProtection? Protection { get; set; }
+#nullable restore
+#else
+        public global::CommunityLead.LabClient.Api.Models.SummaryProtection Protection { get; set; }
 #endif
         /// <summary>The rows property</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
@@ -73,7 +97,10 @@ namespace CommunityLead.LabClient.Api.Models
             return new Dictionary<string, Action<IParseNode>>
             {
                 { "groupBy", n => { GroupBy = n.GetStringValue(); } },
+                { "kitKind", n => { KitKind = n.GetStringValue(); } },
                 { "notes", n => { Notes = n.GetCollectionOfPrimitiveValues<string>()?.AsList(); } },
+                { "period", n => { Period = n.GetStringValue(); } },
+                { "protection", n => { Protection = n.GetObjectValue<global::CommunityLead.LabClient.Api.Models.SummaryProtection>(global::CommunityLead.LabClient.Api.Models.SummaryProtection.CreateFromDiscriminatorValue); } },
                 { "rows", n => { Rows = n.GetCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.SummaryRow>(global::CommunityLead.LabClient.Api.Models.SummaryRow.CreateFromDiscriminatorValue)?.AsList(); } },
                 { "suppressionThreshold", n => { SuppressionThreshold = n.GetIntValue(); } },
                 { "total", n => { Total = n.GetObjectValue<global::CommunityLead.LabClient.Api.Models.SummaryRow>(global::CommunityLead.LabClient.Api.Models.SummaryRow.CreateFromDiscriminatorValue); } },
@@ -88,7 +115,10 @@ namespace CommunityLead.LabClient.Api.Models
         {
             if(ReferenceEquals(writer, null)) throw new ArgumentNullException(nameof(writer));
             writer.WriteStringValue("groupBy", GroupBy);
+            writer.WriteStringValue("kitKind", KitKind);
             writer.WriteCollectionOfPrimitiveValues<string>("notes", Notes);
+            writer.WriteStringValue("period", Period);
+            writer.WriteObjectValue<global::CommunityLead.LabClient.Api.Models.SummaryProtection>("protection", Protection);
             writer.WriteCollectionOfObjectValues<global::CommunityLead.LabClient.Api.Models.SummaryRow>("rows", Rows);
             writer.WriteIntValue("suppressionThreshold", SuppressionThreshold);
             writer.WriteObjectValue<global::CommunityLead.LabClient.Api.Models.SummaryRow>("total", Total);

@@ -10,6 +10,9 @@ namespace CommunityLead.Tests.Infrastructure.OpenApi;
 /// The example lab client (examples/LabClient) is Kiota's output for the served document: generated again here,
 /// it must be what is committed, and it must do a lab's work against the real pipeline.
 /// </summary>
+// Pages, the API description and the README are the same whichever store is behind them: the PostgreSQL run
+// of .ci/run leaves these out (Store=Independent).
+[Trait("Store", "Independent")]
 public class GeneratedLabClientTests
 {
     [Fact]

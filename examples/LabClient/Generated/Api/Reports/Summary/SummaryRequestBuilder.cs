@@ -22,7 +22,7 @@ namespace CommunityLead.LabClient.Api.Api.Reports.Summary
         /// </summary>
         /// <param name="pathParameters">Path parameters for the request</param>
         /// <param name="requestAdapter">The request adapter to use to execute the requests.</param>
-        public SummaryRequestBuilder(Dictionary<string, object> pathParameters, IRequestAdapter requestAdapter) : base(requestAdapter, "{+baseurl}/api/reports/summary{?ageBand*,areaCode*,format*,from*,groupBy*,serviceLine*,to*,waterSource*}", pathParameters)
+        public SummaryRequestBuilder(Dictionary<string, object> pathParameters, IRequestAdapter requestAdapter) : base(requestAdapter, "{+baseurl}/api/reports/summary{?ageBand*,areaCode*,format*,from*,groupBy*,kitKind*,serviceLine*,to*,waterSource*}", pathParameters)
         {
         }
         /// <summary>
@@ -30,11 +30,11 @@ namespace CommunityLead.LabClient.Api.Api.Reports.Summary
         /// </summary>
         /// <param name="rawUrl">The raw URL to use for the request builder.</param>
         /// <param name="requestAdapter">The request adapter to use to execute the requests.</param>
-        public SummaryRequestBuilder(string rawUrl, IRequestAdapter requestAdapter) : base(requestAdapter, "{+baseurl}/api/reports/summary{?ageBand*,areaCode*,format*,from*,groupBy*,serviceLine*,to*,waterSource*}", rawUrl)
+        public SummaryRequestBuilder(string rawUrl, IRequestAdapter requestAdapter) : base(requestAdapter, "{+baseurl}/api/reports/summary{?ageBand*,areaCode*,format*,from*,groupBy*,kitKind*,serviceLine*,to*,waterSource*}", rawUrl)
         {
         }
         /// <summary>
-        /// Counts and statistics by area, period, age band, service line or band; small counts hidden
+        /// Counts and statistics by area, period, age band, service line, band or kit kind; small counts hidden
         /// </summary>
         /// <returns>A <see cref="global::CommunityLead.LabClient.Api.Models.SummaryReport"/></returns>
         /// <param name="cancellationToken">Cancellation token to use when cancelling requests</param>
@@ -61,7 +61,7 @@ namespace CommunityLead.LabClient.Api.Api.Reports.Summary
             return await RequestAdapter.SendAsync<global::CommunityLead.LabClient.Api.Models.SummaryReport>(requestInfo, global::CommunityLead.LabClient.Api.Models.SummaryReport.CreateFromDiscriminatorValue, errorMapping, cancellationToken).ConfigureAwait(false);
         }
         /// <summary>
-        /// Counts and statistics by area, period, age band, service line or band; small counts hidden
+        /// Counts and statistics by area, period, age band, service line, band or kit kind; small counts hidden
         /// </summary>
         /// <returns>A <see cref="RequestInformation"/></returns>
         /// <param name="requestConfiguration">Configuration for the request such as headers, query parameters, and middleware options.</param>
@@ -89,7 +89,7 @@ namespace CommunityLead.LabClient.Api.Api.Reports.Summary
             return new global::CommunityLead.LabClient.Api.Api.Reports.Summary.SummaryRequestBuilder(rawUrl, RequestAdapter);
         }
         /// <summary>
-        /// Counts and statistics by area, period, age band, service line or band; small counts hidden
+        /// Counts and statistics by area, period, age band, service line, band or kit kind; small counts hidden
         /// </summary>
         [global::System.CodeDom.Compiler.GeneratedCode("Kiota", "1.0.0")]
         public partial class SummaryRequestBuilderGetQueryParameters 
@@ -104,7 +104,7 @@ namespace CommunityLead.LabClient.Api.Api.Reports.Summary
             [QueryParameter("ageBand")]
             public string AgeBand { get; set; }
 #endif
-            /// <summary>Only this area</summary>
+            /// <summary>Only this area (at most one of areaCode, waterSource, ageBand, serviceLine)</summary>
 #if NETSTANDARD2_1_OR_GREATER || NETCOREAPP3_1_OR_GREATER
 #nullable enable
             [QueryParameter("areaCode")]
@@ -124,16 +124,19 @@ namespace CommunityLead.LabClient.Api.Api.Reports.Summary
             [QueryParameter("format")]
             public string Format { get; set; }
 #endif
-            /// <summary>First day of a month, e.g. 2026-04-01</summary>
+            /// <summary>First day of one whole month, quarter or year, e.g. 2026-04-01 (with to)</summary>
             [QueryParameter("from")]
             public Date? From { get; set; }
             /// <summary>What the rows are (area by default)</summary>
             [QueryParameter("groupBy")]
             public global::CommunityLead.LabClient.Api.Models.SummaryGrouping? GroupBy { get; set; }
+            /// <summary>Water (the default) or soil: never counted together</summary>
+            [QueryParameter("kitKind")]
+            public global::CommunityLead.LabClient.Api.Models.ReportKitKind? KitKind { get; set; }
             /// <summary>Only homes with this service line</summary>
             [QueryParameter("serviceLine")]
             public global::CommunityLead.LabClient.Api.Models.ServiceLineMaterial? ServiceLine { get; set; }
-            /// <summary>Last day of a month, e.g. 2026-06-30</summary>
+            /// <summary>Last day of that month, quarter or year, e.g. 2026-06-30 (with from)</summary>
             [QueryParameter("to")]
             public Date? To { get; set; }
             /// <summary>Only homes on this water source</summary>
