@@ -46,7 +46,7 @@ public class ConsoleWalkTests
         await page.GetByLabel("Street address").FillAsync("7 Heron Quay");
         await page.GetByLabel("City").FillAsync("Brindle Cove");
         await page.GetByLabel("Postal code").FillAsync("00017");
-        await page.GetByLabel("Area code").FillAsync("harbor");
+        await page.GetByLabel("Area code").FillAsync("harbour");
         await page.GetByLabel("Service line").SelectOptionAsync("lead");
         await page.GetByLabel("A child under 6 lives here").CheckAsync();
         await page.GetByLabel("Consent form version").FillAsync("2026-01");
@@ -57,7 +57,7 @@ public class ConsoleWalkTests
         // Someone else saves the same home meanwhile: our edit is refused and said so.
         var found = await GetAsync(coordinator, "/api/households?search=5550102234");
         var householdId = found["items"]![0]!["id"]!.GetValue<string>();
-        var changed = Household(h => { h["name"] = "Odile Marsh-Ferrand"; h["address"]!["line1"] = "7 Heron Quay"; h["areaCode"] = "harbor"; });
+        var changed = Household(h => { h["name"] = "Odile Marsh-Ferrand"; h["address"]!["line1"] = "7 Heron Quay"; h["areaCode"] = "harbour"; });
         (await coordinator.PutAsJsonAsync($"/api/households/{householdId}", changed)).EnsureSuccessStatusCode();
         await page.GetByLabel("Email").FillAsync("odile@example.org");
         await page.GetByRole(AriaRole.Button, new() { Name = "Save" }).ClickAsync();
@@ -84,7 +84,16 @@ public class ConsoleWalkTests
         Assert.Equal(code, sheet.Decode(BarcodeFormat.QR_CODE, stock.Left, stock.Top, stock.LabelWidth * 0.42, stock.LabelHeight));
 
         // The household fills the bottles; receipt by "scanner": a typo first, then the code, each followed by Enter.
-        await PostAsync(coordinator, $"/api/kits/{code}/collection", GoodWaterCollection(), System.Net.HttpStatusCode.OK);
+        // The browser's service runs on the real clock and the kit was issued just now: the bottles are filled after it.
+        var filled = DateTimeOffset.UtcNow;
+        await PostAsync(coordinator, $"/api/kits/{code}/collection", new
+        {
+            samples = new object[]
+            {
+                new { bottle = "first-draw", volumeMl = 1000, collectedAt = filled.ToString("O"), waterLastUsedAt = filled.AddHours(-8).ToString("O"), tap = "kitchen" },
+                new { bottle = "flushed", volumeMl = 1000, collectedAt = filled.AddSeconds(20).ToString("O"), flushSeconds = 120 },
+            },
+        }, System.Net.HttpStatusCode.OK);
         var scan = page.GetByLabel("Kit code").First;
         await scan.FocusAsync();
         await scan.PressSequentiallyAsync(LabFixtures.Mistyped(code));
@@ -174,7 +183,7 @@ public class ConsoleWalkTests
     {
         await page.GetByLabel(new Regex("CSV")).First.SetInputFilesAsync(new FilePayload { Name = name, MimeType = "text/csv", Buffer = Encoding.UTF8.GetBytes(csv) });
         await page.Locator("#batch-id").FillAsync(batchId);
-        await page.Locator("#analyzed-at").FillAsync("2026-04-05T10:00");
+        await page.Locator("#analyzed-at").FillAsync(DateTime.UtcNow.AddMinutes(2).ToString("yyyy-MM-dd'T'HH:mm", System.Globalization.CultureInfo.InvariantCulture));
         await page.Locator("#upload-form button[type=submit]").ClickAsync();
     }
 
