@@ -8,6 +8,19 @@ namespace CommunityLead.Rules.Sampling;
 /// </summary>
 public static class CollectionCheck
 {
+    /// <summary>
+    /// Bottles dated before their kit was issued: kept (a kit entered after hand-out carries the date it was typed
+    /// in), flagged so the coordinator checks the date. <paramref name="issued"/> is shown as given.
+    /// </summary>
+    public static IEnumerable<CollectionFlag> BeforeIssue(string kitCode, DateTimeOffset issued, IReadOnlyList<DateTimeOffset> collected)
+    {
+        for (var i = 0; i < collected.Count; i++)
+            if (collected[i] < issued)
+                yield return new CollectionFlag(CollectionFlagCode.CollectedBeforeIssue, FlagSeverity.Warning, i,
+                    $"Dated before kit {kitCode} was issued ({issued.UtcDateTime.ToString("yyyy-MM-dd HH:mm", System.Globalization.CultureInfo.InvariantCulture)} UTC): " +
+                    "check the date; standing and holding times use it as given.");
+    }
+
     public static CollectionReview Review(
         KitKind kind, IReadOnlyList<SampleEntry> samples, DateTimeOffset recordedAt, SamplingLimits limits)
     {

@@ -12,6 +12,7 @@ public enum CollectionFlagCode
     DuplicateBottle,
     SequenceGap,
     FlushTimeMissing,
+    CollectedBeforeIssue,
 }
 
 public enum FlagSeverity

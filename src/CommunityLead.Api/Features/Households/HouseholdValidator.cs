@@ -36,12 +36,15 @@ public sealed class HouseholdValidator : AbstractValidator<HouseholdRequest>
                 // A managed list, so a typo cannot split a report group; the answer names the codes to choose from.
                 var wanted = AreaCodes.Normal(code!);
                 var known = await db.Areas.AsNoTracking().OrderBy(a => a.Code).Select(a => new { a.Code, a.Active }).ToListAsync(ct);
+                // The list is the program's to start: until it names an area, any well-formed code is taken, as v1 of
+                // the contract promised (an upgraded store already has its households' codes listed).
+                if (known.Count == 0) return;
                 if (known.Any(a => a.Code == wanted && a.Active)) return;
                 // A household edited after its area was deactivated keeps it; new homes cannot choose it.
                 if (known.Any(a => a.Code == wanted) && await EditedHouseholdHasAsync(wanted, ct)) return;
                 var active = known.Where(a => a.Active).Select(a => a.Code).ToList();
                 context.AddFailure(active.Count == 0
-                        ? "The program has no areas yet: add them first (POST /api/areas)."
+                        ? "Every area of the program is inactive: make one active (PUT /api/areas/{code})."
                         : $"'{code}' is not one of the program's areas. Use one of: {string.Join(", ", active)}.");
             });
         RuleFor(h => h.WaterSource).NotNull();

@@ -28,10 +28,10 @@ public static class CollectionRecording
         if (kit is null) return missing!;
         var samples = request.Samples!;
         if (WrongBottles(kit.Kind, samples) is { Count: > 0 } wrong) return Problems.Fields(wrong);
-        if (IssueDates.CollectedBeforeIssue(kit, samples) is { Count: > 0 } early) return Problems.Fields(early);
 
         var now = clock.GetUtcNow();
-        var review = Review(kit.Kind, samples, now, limits.Value);
+        var checkedSamples = Review(kit.Kind, samples, now, limits.Value);
+        var review = checkedSamples with { Flags = [.. checkedSamples.Flags, .. IssueDates.CollectedBeforeIssue(kit, samples)] };
         var actor = Actor.From(http.User);
         if (KitTransitions.Apply(db, kit, KitAction.RecordCollection, actor, now.UtcDateTime, detail: Describe(samples.Count, review)) is { } illegal)
             return illegal;

@@ -1,31 +1,24 @@
 using System.Globalization;
 using CommunityLead.Api.Data.Entities;
-using CommunityLead.Api.Infrastructure;
-using Microsoft.AspNetCore.Http.HttpResults;
+using CommunityLead.Rules.Sampling;
 
 namespace CommunityLead.Api.Features.Kits;
 
 /// <summary>
-/// Collections and receipts dated before the kit was issued are refused (400 naming the field), not flagged: no
-/// bottle is filled and no kit reaches the lab before the kit was handed out, so the date was mistyped, and the
-/// person typing it is there to put it right now. Kept with a flag, the wrong date would still shift standing
-/// time, holding times and the report month until someone acted on it. A kit entered after it was handed out
-/// carries its hand-out date (<see cref="IssueKitRequest.IssuedAt"/>), so a true date is never refused.
+/// Collections and receipts dated before the kit was issued are kept and flagged, not refused: v1 of the contract
+/// took them, and a kit entered after it was handed out without its hand-out date (<see cref="IssueKitRequest.IssuedAt"/>)
+/// carries the date it was typed in, so an earlier bottle is not proof of a typo. The flag puts the date in front of
+/// the coordinator on the kit (and the receipt's in its history) so a mistyped one is put right.
 /// </summary>
 internal static class IssueDates
 {
-    public static Dictionary<string, string[]> CollectedBeforeIssue(Kit kit, IReadOnlyList<SampleRequest> samples)
-    {
-        var errors = new Dictionary<string, string[]>();
-        for (var i = 0; i < samples.Count; i++)
-            if (samples[i].CollectedAt!.Value.UtcDateTime < kit.IssuedAtUtc)
-                errors[$"samples[{i}].collectedAt"] = [$"Kit {kit.Code} was issued on {Shown(kit)}: a bottle of it cannot be filled before then. Check the date."];
-        return errors;
-    }
+    public static IEnumerable<CollectionFlag> CollectedBeforeIssue(Kit kit, IReadOnlyList<SampleRequest> samples) =>
+        CollectionCheck.BeforeIssue(kit.Code, new DateTimeOffset(kit.IssuedAtUtc, TimeSpan.Zero), [.. samples.Select(s => s.CollectedAt!.Value)]);
 
-    public static ValidationProblem? ReceivedBeforeIssue(Kit kit, DateTimeOffset receivedAt) =>
+    /// <summary>A note for the receipt's history when it is dated before the kit was issued; null otherwise.</summary>
+    public static string? ReceivedBeforeIssue(Kit kit, DateTimeOffset receivedAt) =>
         receivedAt.UtcDateTime < kit.IssuedAtUtc
-            ? Problems.Field("receivedAt", $"Kit {kit.Code} was issued on {Shown(kit)}: it cannot have reached the lab before then. Check the date.")
+            ? $"received date is before the kit was issued ({Shown(kit)}): check it"
             : null;
 
     private static string Shown(Kit kit) => kit.IssuedAtUtc.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);

@@ -45,9 +45,10 @@ public static class KitMoves
         var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
         if (invalid is not null) return invalid;
         if (kit is null) return missing!;
-        if (IssueDates.ReceivedBeforeIssue(kit, request.ReceivedAt!.Value) is { } early) return early;
+        var early = IssueDates.ReceivedBeforeIssue(kit, request.ReceivedAt!.Value);
+        var detail = early is null ? request.Note : string.Join("; ", new[] { request.Note, early }.Where(d => d is not null));
         var actor = Actor.From(http.User);
-        if (KitTransitions.Apply(db, kit, KitAction.Receive, actor, clock.GetUtcNow().UtcDateTime, detail: request.Note) is { } illegal)
+        if (KitTransitions.Apply(db, kit, KitAction.Receive, actor, clock.GetUtcNow().UtcDateTime, detail: detail) is { } illegal)
             return illegal;
         kit.ReceivedAt = request.ReceivedAt;
         return await SaveAndReadAsync(db, kit.Code, actor, ct);

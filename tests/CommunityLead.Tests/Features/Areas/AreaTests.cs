@@ -25,6 +25,19 @@ public class AreaTests
     }
 
     [Fact]
+    public async Task Household_BeforeTheProgramListsAnyArea_AnyWellFormedCodeIsTaken()
+    {
+        using var app = new CommunityLeadFactory { Areas = [] };
+        var coordinator = app.CreateClient(Roles.Coordinator);
+
+        var response = await coordinator.PostAsJsonAsync("/api/households", Household(h => h["areaCode"] = "harbor"));
+
+        Assert.Equal(HttpStatusCode.Created, response.StatusCode);
+        await BadInput.ExpectFieldError(
+            await coordinator.PostAsJsonAsync("/api/households", Household(h => h["areaCode"] = "not an area!")), "areaCode");
+    }
+
+    [Fact]
     public async Task Areas_AddRenameDeactivate_NewHomesCannotChooseItButItsHomesKeepIt()
     {
         using var app = new CommunityLeadFactory { Areas = [] };

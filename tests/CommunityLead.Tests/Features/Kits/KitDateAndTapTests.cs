@@ -7,7 +7,7 @@ using static CommunityLead.Tests.Infrastructure.Fixtures;
 
 namespace CommunityLead.Tests.Features.Kits;
 
-/// <summary>Dates before the kit was handed out are refused by field; the tap is one of a closed list, with a note.</summary>
+/// <summary>Dates before the kit was handed out are kept and flagged; the tap is one of a closed list, with a note.</summary>
 public class KitDateAndTapTests
 {
     private static async Task<string> KitIssuedOnAsync(HttpClient coordinator, string issuedAt)
@@ -18,34 +18,34 @@ public class KitDateAndTapTests
     }
 
     [Fact]
-    public async Task Collection_DatedBeforeTheKitWasIssued_400NamingTheBottleAndNothingStored()
+    public async Task Collection_DatedBeforeTheKitWasIssued_KeptWithAFlagOnThatBottle()
     {
         using var app = new CommunityLeadFactory();
         var coordinator = app.CreateClient(Roles.Coordinator);
         var code = await KitIssuedOnAsync(coordinator, "2026-04-03T06:02:00+00:00"); // between the two bottles
 
-        var response = await coordinator.PostAsJsonAsync($"/api/kits/{code}/collection", GoodWaterCollection());
+        var kit = await PostAsync(coordinator, $"/api/kits/{code}/collection", GoodWaterCollection(), HttpStatusCode.OK);
 
-        var errors = (await BadInput.ExpectFieldError(response, "samples[0].collectedAt"))["errors"]!.AsObject();
-        Assert.Equal(["samples[0].collectedAt"], errors.Select(e => e.Key));
-        Assert.Contains("2026-04-03 06:02 UTC", errors["samples[0].collectedAt"]![0]!.GetValue<string>());
-        Assert.Equal(0, app.WithDb(db => db.Collections.Count()));
-        Assert.Equal("issued", (await GetAsync(coordinator, $"/api/kits/{code}"))["state"]!.GetValue<string>());
+        var flags = kit["flags"]!.AsArray().Where(f => f!["code"]!.GetValue<string>() == "collected-before-issue").ToList();
+        var flag = Assert.Single(flags)!;
+        Assert.Equal("first-draw", flag["bottle"]!.GetValue<string>());
+        Assert.Contains("2026-04-03 06:02 UTC", flag["message"]!.GetValue<string>());
+        Assert.Equal("collected", kit["state"]!.GetValue<string>());
     }
 
     [Fact]
-    public async Task Receipt_DatedBeforeTheKitWasIssued_400NamingReceivedAtAndTheKitNotReceived()
+    public async Task Receipt_DatedBeforeTheKitWasIssued_KeptAndSaidInTheKitsHistory()
     {
         using var app = new CommunityLeadFactory();
         var coordinator = app.CreateClient(Roles.Coordinator);
         var lab = app.CreateClient(Roles.Lab);
         var code = await KitIssuedOnAsync(coordinator, "2026-04-05T09:00:00+00:00");
 
-        await BadInput.ExpectFieldError(await lab.PostAsJsonAsync($"/api/kits/{code}/receipt", new { receivedAt = "2026-04-04T11:00:00+00:00" }), "receivedAt");
+        await PostAsync(lab, $"/api/kits/{code}/receipt", new { receivedAt = "2026-04-04T11:00:00+00:00" }, HttpStatusCode.OK);
 
-        Assert.Equal("issued", (await GetAsync(coordinator, $"/api/kits/{code}"))["state"]!.GetValue<string>());
-        // The same kit received after it was handed out is fine.
-        await PostAsync(lab, $"/api/kits/{code}/receipt", new { receivedAt = "2026-04-06T11:00:00+00:00" }, HttpStatusCode.OK);
+        var kit = await GetAsync(coordinator, $"/api/kits/{code}");
+        Assert.Equal("received", kit["state"]!.GetValue<string>());
+        Assert.Contains(kit["history"]!.AsArray(), h => h!["detail"]?.GetValue<string>()?.Contains("before the kit was issued") == true);
     }
 
     [Fact]

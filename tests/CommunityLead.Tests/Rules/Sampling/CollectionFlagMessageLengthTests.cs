@@ -30,7 +30,8 @@ public class CollectionFlagMessageLengthTests
         var soil = CollectionCheck.Review(KitKind.Soil, [Soil(SoilLocation.PlayArea, Latest), Soil(SoilLocation.PlayArea, Latest)], Earliest,
             new SamplingLimits());
 
-        var flags = new[] { shortAndGaps, tooLong, water, soil }.SelectMany(r => r.Flags).ToList();
+        var flags = new[] { shortAndGaps, tooLong, water, soil }.SelectMany(r => r.Flags)
+            .Concat(CollectionCheck.BeforeIssue("7KQ4-M2XD-H", Latest, [Earliest])).ToList();
 
         Assert.Equal(Enum.GetValues<CollectionFlagCode>().Order(), flags.Select(f => f.Code).Distinct().Order());
         Assert.All(flags, f => Assert.True(f.Message.Length <= limit, $"{f.Message.Length} characters: {f.Message}"));
