@@ -48,5 +48,9 @@ namespace CommunityLead.LabClient.Api.Models
         #pragma warning disable CS1591
         FlushTimeMissing,
         #pragma warning restore CS1591
+        [EnumMember(Value = "collected-before-issue")]
+        #pragma warning disable CS1591
+        CollectedBeforeIssue,
+        #pragma warning restore CS1591
     }
 }
