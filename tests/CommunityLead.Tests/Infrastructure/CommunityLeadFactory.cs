@@ -100,7 +100,7 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
         {
             db.SaveChanges();
         }
-        catch (Microsoft.EntityFrameworkCore.DbUpdateException) when (Areas.All(c => db.Areas.AsNoTracking().Any(a => a.Code == c)))
+        catch (Microsoft.EntityFrameworkCore.DbUpdateException) when (Areas.All(c => Microsoft.EntityFrameworkCore.EntityFrameworkQueryableExtensions.AsNoTracking(db.Areas).Any(a => a.Code == c)))
         {
             // Two instances started together on one database (TwoInstancesTests): the other listed them first.
         }
