@@ -20,7 +20,7 @@ public sealed partial record QcWindows
     /// <summary>
     /// The service's concentration from the lab's intensities may differ from the reported one by this much
     /// [our default; no published rule]: the same curve should give the same answer, so a larger gap means the
-    /// reported value came from another curve, a dilution not stated, or a transcription error.
+    /// reported value came from another curve, a dilution not stated, or a figure copied wrongly.
     /// </summary>
     public double MaxComputedDifferencePercent { get; init; } = 10;
 
