@@ -29,8 +29,7 @@ public class LabIntakeBenchmark
         Served.CommandAsync(database, "migrate").GetAwaiter().GetResult();
         codes = StoreSeeder.ReceivedKits(database, Kits);
         csv = Batches.Csv(codes);
-        var key = Served.CommandAsync(database, "keys", "create", "--role", "lab", "--label", "bench").GetAwaiter().GetResult()
-            .Split('\n', StringSplitOptions.RemoveEmptyEntries)[^1].Trim();
+        var key = Served.KeyAsync(database, "lab").GetAwaiter().GetResult();
         service = Served.ServiceAsync(database).GetAwaiter().GetResult();
         lab = service.Client(key);
     }

@@ -26,8 +26,7 @@ public class SummaryBenchmark
     {
         Served.CommandAsync(database, "migrate").GetAwaiter().GetResult();
         StoreSeeder.InterpretedKits(database, Kits);
-        var key = Served.CommandAsync(database, "keys", "create", "--role", "health", "--label", "bench").GetAwaiter().GetResult()
-            .Split('\n', StringSplitOptions.RemoveEmptyEntries)[^1].Trim();
+        var key = Served.KeyAsync(database, "health").GetAwaiter().GetResult();
         service = Served.ServiceAsync(database).GetAwaiter().GetResult();
         health = service.Client(key);
     }

@@ -45,15 +45,11 @@ internal sealed class PerformanceTable(bool quick)
         return (database, StoreSeeder.ReceivedKits(database, kits));
     }
 
-    private static async Task<string> KeyAsync(string database, string role) =>
-        (await Served.CommandAsync(database, "keys", "create", "--role", role, "--label", $"perf-{role}-{Guid.NewGuid():N}"))
-        .Split('\n', StringSplitOptions.RemoveEmptyEntries)[^1].Trim();
-
     private async Task StartUpAndKitReadsAsync()
     {
         var (database, codes) = await StoreAsync("reads", 10_000);
-        var coordinator = await KeyAsync(database, "coordinator");
-        var lab = await KeyAsync(database, "lab");
+        var coordinator = await Served.KeyAsync(database, "coordinator");
+        var lab = await Served.KeyAsync(database, "lab");
 
         var startUps = new List<TimeSpan>();
         var emptyStartUps = new List<TimeSpan>();
@@ -90,7 +86,7 @@ internal sealed class PerformanceTable(bool quick)
     private async Task IngestAsync()
     {
         var (database, codes) = await StoreAsync("ingest", 5_000);
-        var lab = await KeyAsync(database, "lab");
+        var lab = await Served.KeyAsync(database, "lab");
         var csv = Batches.Csv(codes);
         var baseline = Baselines.InsertRows(folder, codes);
         using var server = await Served.ServiceAsync(database);
@@ -110,7 +106,7 @@ internal sealed class PerformanceTable(bool quick)
 
         if (quick) return;
         var (large, largeCodes) = await StoreAsync("ingest-large", 50_000);
-        var largeLab = await KeyAsync(large, "lab");
+        var largeLab = await Served.KeyAsync(large, "lab");
         using var largeServer = await Served.ServiceAsync(large);
         using var largeClient = largeServer.Client(largeLab);
         var largeIdle = largeServer.Process.Memory();
@@ -124,8 +120,8 @@ internal sealed class PerformanceTable(bool quick)
     private async Task LettersAsync()
     {
         var (database, codes) = await StoreAsync("letters", 1_000);
-        var lab = await KeyAsync(database, "lab");
-        var coordinator = await KeyAsync(database, "coordinator");
+        var lab = await Served.KeyAsync(database, "lab");
+        var coordinator = await Served.KeyAsync(database, "coordinator");
         using var server = await Served.ServiceAsync(database);
         using (var labClient = server.Client(lab))
         {
@@ -156,7 +152,7 @@ internal sealed class PerformanceTable(bool quick)
         var database = Path.Combine(folder, "summary.db");
         await Served.CommandAsync(database, "migrate");
         StoreSeeder.InterpretedKits(database, kits);
-        var health = await KeyAsync(database, "health");
+        var health = await Served.KeyAsync(database, "health");
         using var server = await Served.ServiceAsync(database);
         using var client = server.Client(health);
         var idle = server.Process.Memory();

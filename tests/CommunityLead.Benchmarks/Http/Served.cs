@@ -47,6 +47,11 @@ internal sealed class Served : IDisposable
         return run.Output;
     }
 
+    /// <summary>A fresh key of <paramref name="role"/> on <paramref name="database"/>: `keys create` prints it last.</summary>
+    public static async Task<string> KeyAsync(string database, string role) =>
+        (await CommandAsync(database, "keys", "create", "--role", role, "--label", $"perf-{role}-{Guid.NewGuid():N}"))
+        .Split('\n', StringSplitOptions.RemoveEmptyEntries)[^1].Trim();
+
     private static async Task<Served> StartAsync(string dll, string[] arguments, Dictionary<string, string> environment)
     {
         var port = FreePort();
