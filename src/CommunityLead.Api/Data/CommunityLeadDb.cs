@@ -29,6 +29,7 @@ public class CommunityLeadDb : DbContext
     public DbSet<KitInterpretation> Interpretations => Set<KitInterpretation>();
     public DbSet<IssuedLetter> Letters => Set<IssuedLetter>();
     public DbSet<Area> Areas => Set<Area>();
+    public DbSet<ReportInputs> ReportInputs => Set<ReportInputs>();
 
     protected override void OnModelCreating(ModelBuilder modelBuilder) =>
         modelBuilder.ApplyConfigurationsFromAssembly(typeof(CommunityLeadDb).Assembly);

@@ -21,8 +21,9 @@ public class Kit
     /// <summary>When the first bottle of the current collection was taken (UTC): the report period's date.</summary>
     public DateTime? CollectedAtUtc { get; set; }
     /// <summary>
-    /// The report period as yyyymm (collection month, else issue month), kept by the DbContext on every save so
-    /// monthly and quarterly reports group on a plain integer.
+    /// The UTC month as yyyymm (collection month, else issue month), kept by the DbContext on every save for queries
+    /// by hand and the benchmarks' baseline. The health reports do not use it: they take months on the program's own
+    /// calendar (Program:TimeZone, ReportKits), which a stored UTC month would get wrong near midnight.
     /// </summary>
     public int PeriodMonth { get; set; }
     /// <summary>The current interpretation's bands, kept here so reports count in one GROUP BY.</summary>

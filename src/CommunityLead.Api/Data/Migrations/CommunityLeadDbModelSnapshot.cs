@@ -810,6 +810,26 @@ namespace CommunityLead.Api.Data.Migrations
                     b.ToTable("LabResults");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.ReportInputs", b =>
+                {
+                    b.Property<int>("Id")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<long>("Version")
+                        .HasColumnType("INTEGER");
+
+                    b.HasKey("Id");
+
+                    b.ToTable("ReportInputs");
+
+                    b.HasData(
+                        new
+                        {
+                            Id = 1,
+                            Version = 0L
+                        });
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Sample", b =>
                 {
                     b.Property<int>("Id")

@@ -37,20 +37,20 @@ public static class ReportEndpoints
 
     /// <summary>Aggregates only: no route of this group returns a row about one home.</summary>
     public static async Task<Results<Ok<SummaryReport>, ContentHttpResult, ValidationProblem>> Summary(
-        HttpContext http, CommunityLeadDb db, IOptions<ReportOptions> options, CancellationToken ct)
+        HttpContext http, CommunityLeadDb db, ReportRelease release, ProgramCalendar calendar, IOptions<ReportOptions> options, CancellationToken ct)
     {
         var (request, errors) = SummaryRequest.Parse(http.Request.Query);
         if (request is null) return Problems.Fields(errors);
-        // Decided over the whole store on every call, so two instances (or two calls) never disagree on a cell.
-        var tables = SummaryTables.Protect(await ReportKits.LoadAsync(db, ct), options.Value);
-        var report = SummaryBuilder.Build(request, tables, options.Value);
+        // Decided over the whole store, once per version of it, so two calls (or two instances) never disagree on a cell.
+        var tables = await release.TablesAsync(db, ct);
+        var report = SummaryBuilder.Build(request, tables, options.Value, calendar.Zone.Id);
         return request.Csv
             ? TypedResults.Text(SummaryCsv.Write(report), "text/csv", Encoding.UTF8)
             : TypedResults.Ok(report);
     }
 
     public static async Task<Results<ContentHttpResult, ValidationProblem>> Chart(
-        HttpContext http, CommunityLeadDb db, IOptions<ReportOptions> options, CancellationToken ct)
+        HttpContext http, CommunityLeadDb db, ReportRelease release, ProgramCalendar calendar, IOptions<ReportOptions> options, CancellationToken ct)
     {
         var chart = http.Request.Query["chart"].ToString();
         if (chart is not ("lead-bands" or "share-at-action-level"))
@@ -58,7 +58,7 @@ public static class ReportEndpoints
         var (request, errors) = SummaryRequest.Parse(http.Request.Query);
         if (request is null) return Problems.Fields(errors);
         // The chart draws the same protected report as the table: a hidden cell stays hidden in both.
-        var report = SummaryBuilder.Build(request, SummaryTables.Protect(await ReportKits.LoadAsync(db, ct), options.Value), options.Value);
+        var report = SummaryBuilder.Build(request, await release.TablesAsync(db, ct), options.Value, calendar.Zone.Id);
         var spanish = http.Request.Query["lang"] == "es";
         var svg = chart == "lead-bands" ? SummaryChart.LeadBands(report, spanish) : SummaryChart.ShareAtActionLevel(report, spanish);
         return TypedResults.Text(svg, "image/svg+xml", Encoding.UTF8);

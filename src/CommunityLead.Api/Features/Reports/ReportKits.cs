@@ -1,5 +1,6 @@
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Infrastructure;
 using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
@@ -24,11 +25,11 @@ public sealed record ReportKit(
 /// </summary>
 public static class ReportKits
 {
-    public static async Task<List<ReportKit>> LoadAsync(CommunityLeadDb db, CancellationToken ct)
+    public static async Task<List<ReportKit>> LoadAsync(CommunityLeadDb db, ProgramCalendar calendar, CancellationToken ct)
     {
         var kits = await db.Kits.AsNoTracking().Select(k => new
         {
-            k.Id, k.Kind, k.PeriodMonth, k.Household!.AreaCode, k.Household.WaterSource, k.Household.YearBuilt, k.Household.ServiceLine,
+            k.Id, k.Kind, k.CollectedAtUtc, k.IssuedAtUtc, k.Household!.AreaCode, k.Household.WaterSource, k.Household.YearBuilt, k.Household.ServiceLine,
             k.Household.ChildUnder6, Returned = k.ReceivedAt != null, k.Band, k.LeadBand, k.CopperBand,
         }).ToListAsync(ct);
         // First-draw lead (sequential bottle 1 counts as the first draw) from results in effect.
@@ -41,8 +42,14 @@ public static class ReportKits
             .GroupBy(l => l.KitId).Select(g => new { KitId = g.Key, Days = g.Min(l => l.DaysFromCollection!.Value) })
             .ToDictionaryAsync(d => d.KitId, d => d.Days, ct);
         return [.. kits.OrderBy(k => k.Id).Select(k => new ReportKit(
-            k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, k.PeriodMonth, k.AreaCode, k.WaterSource, k.YearBuilt,
+            k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, Month(calendar.DateOf(k.CollectedAtUtc ?? k.IssuedAtUtc)), k.AreaCode, k.WaterSource, k.YearBuilt,
             k.ServiceLine, k.ChildUnder6, k.Returned, k.Band, k.LeadBand, k.CopperBand,
             [.. lead[k.Id]], days.TryGetValue(k.Id, out var d) ? d : null))];
     }
+
+    /// <summary>
+    /// The report month (yyyymm) of the collection, or of the issue for a kit not yet collected, on the program's own
+    /// calendar: a sample taken on the evening of 31 October in the Americas is October's, though UTC says November.
+    /// </summary>
+    private static int Month(DateOnly date) => date.Year * 100 + date.Month;
 }

@@ -10,7 +10,9 @@ namespace CommunityLead.Api.Features.Reports;
 /// </summary>
 public static class SummaryBuilder
 {
-    public static SummaryReport Build(SummaryRequest request, Dictionary<ReportKitKind, KindTable> tables, ReportOptions options)
+    /// <param name="timeZone">The program's time zone (Program:TimeZone), whose calendar the months, quarters and years follow.</param>
+    public static SummaryReport Build(SummaryRequest request, Dictionary<ReportKitKind, KindTable> tables, ReportOptions options,
+        string timeZone = "UTC")
     {
         var seen = new HashSet<(ReportKitKind, CellKey)>();
         List<SummaryRow> rows;
@@ -28,7 +30,7 @@ public static class SummaryBuilder
         }
         var kind = request.GroupBy == SummaryGrouping.KitKind ? "water, soil" : KebabEnum.Name(request.Kind);
         return new SummaryReport(KebabEnum.Name(request.GroupBy), options.SuppressionThreshold, "lead µg/L (first draw); days", rows, total,
-            SummaryNotes.For(request, options))
+            SummaryNotes.For(request, options, timeZone))
         {
             KitKind = kind,
             Period = SummaryPeriod.Label(request.Period),

@@ -7,12 +7,13 @@ public static class SummaryNotes
 {
     public const string Design = "one protected table set";
 
-    public static IReadOnlyList<string> For(SummaryRequest request, ReportOptions options)
+    public static IReadOnlyList<string> For(SummaryRequest request, ReportOptions options, string timeZone)
     {
         var t = options.SuppressionThreshold;
         return
         [
             $"Counts from 1 to {t} are hidden, and so are other counts wherever needed so that no hidden count can be worked out from this or any other report.",
+            $"Months, quarters and years are the program's calendar ({timeZone}): a kit counts in the month it was collected there, or issued if not yet collected.",
             "Water and soil kits are counted apart; soil results are screening results, not a hazard assessment.",
             "Copper bands and homes with a child under 6 are shown as rows: group by copper-band or child-under-six.",
             "The 90th percentile uses the method of 40 CFR 141.80(c)(3) and is informational only: the homes tested are volunteers, not a compliance sample.",

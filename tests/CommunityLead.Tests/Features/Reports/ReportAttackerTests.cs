@@ -2,6 +2,7 @@ using System.Diagnostics;
 using CommunityLead.Api.Auth;
 using CommunityLead.Api.Features.Reports;
 using CommunityLead.Tests.Infrastructure;
+using Microsoft.Extensions.DependencyInjection;
 using Xunit.Abstractions;
 using static CommunityLead.Tests.Infrastructure.Fixtures;
 
@@ -16,7 +17,8 @@ public class ReportAttackerTests(ITestOutputHelper output)
         using var app = new CommunityLeadFactory();
         ReportStore.Seed(app);
         var options = new ReportOptions();
-        var kits = app.WithDb(db => ReportKits.LoadAsync(db, CancellationToken.None).GetAwaiter().GetResult());
+        var calendar = app.Services.GetRequiredService<CommunityLead.Api.Infrastructure.ProgramCalendar>();
+        var kits = app.WithDb(db => ReportKits.LoadAsync(db, calendar, CancellationToken.None).GetAwaiter().GetResult());
         var tables = SummaryTables.Protect(kits, options);
         output.WriteLine($"protected in {clock.Elapsed.TotalSeconds:0.0} s");
 
@@ -52,38 +54,36 @@ public class ReportAttackerTests(ITestOutputHelper output)
             Assert.True(Truth(cell) == count.Value, $"{cell}: shown {count.Value}, truth {Truth(cell)}");
         var dimensions = ReportDimensions.All.Select((d, i) => (KebabName(d.Grouping), ReportDimensions.Values(kits)[i]))
             .ToDictionary(x => x.Item1, x => x.Item2);
-        var attacker = new LinearAttacker(["water", "soil"], dimensions);
-        foreach (var (cell, count) in published.Where(p => !p.Value.Suppressed)) attacker.Published(cell, count.Value!.Value);
         var protectedCells = published.Where(p => p.Value.Suppressed).Select(p => p.Key).Where(c => Truth(c) is >= 1 and var v && v <= t).ToList();
         Assert.Contains(protectedCells, c => c is { Dimension: "area", Value: ReportStore.SmallArea, Column: "issued" });
 
-        output.WriteLine($"program built in {clock.Elapsed.TotalSeconds:0.0} s");
-        Assert.Equal(Google.OrTools.LinearSolver.Solver.ResultStatus.OPTIMAL, attacker.Feasible());
-        var narrowest = double.PositiveInfinity;
-        PublishedCell? worst = null;
-        // Two programs per hidden small count take about a tenth of a second each here, so the test attacks the
-        // small area's counts and the totals of the whole kind first, then the others in a fixed shuffled order,
-        // for as long as CI can spare (the count attacked is printed).
-        var order = protectedCells.OrderBy(c => c.Value == ReportStore.SmallArea ? 0 : c.Dimension.Length == 0 ? 1 : 2)
-            .ThenBy(c => StableHash(c)).ToList();
-        var budget = TimeSpan.FromSeconds(25);
-        var attack = Stopwatch.StartNew();
-        var attacked = 0;
-        foreach (var cell in order.TakeWhile(_ => attack.Elapsed < budget))
+        // Water and soil share no published count, so each kind is its own program, solved on its own thread. Every
+        // hidden small count is attacked; neighbours in (period, dimension, value) order come one after another, so
+        // each solve starts from a basis close to its answer (GLOP keeps the last one).
+        var attacks = new[] { "water", "soil" }.Select(kind => Task.Run(() =>
         {
-            attacked++;
-            var (min, max) = attacker.Range(cell);
-            Assert.InRange(Truth(cell), min - 1e-6, max + 1e-6); // the attacker's program is right about the truth
-            if (max - min < narrowest) (narrowest, worst) = (max - min, cell);
-        }
+            var attacker = new LinearAttacker([kind], dimensions);
+            foreach (var (cell, count) in published.Where(p => p.Key.Kind == kind && !p.Value.Suppressed))
+                attacker.Published(cell, count.Value!.Value);
+            Assert.Equal(Google.OrTools.LinearSolver.Solver.ResultStatus.OPTIMAL, attacker.Feasible());
+            return protectedCells.Where(c => c.Kind == kind)
+                .OrderBy(c => c.Period, StringComparer.Ordinal).ThenBy(c => c.Dimension, StringComparer.Ordinal)
+                .ThenBy(c => c.Value, StringComparer.Ordinal).ThenBy(c => c.Column, StringComparer.Ordinal)
+                .Select(cell =>
+                {
+                    var (min, max) = attacker.Range(cell);
+                    Assert.InRange(Truth(cell), min - 1e-6, max + 1e-6); // the attacker's program is right about the truth
+                    return (Cell: cell, Range: max - min);
+                }).ToList();
+        })).ToList();
+        var ranges = (await Task.WhenAll(attacks)).SelectMany(r => r).ToList();
+        var attacked = ranges.Count;
+        var (worst, narrowest) = ranges.MinBy(r => r.Range);
         output.WriteLine($"{queries.Count} queries sent ({answered} answered, the rest refused with 400); {published.Count} counts published, " +
             $"{published.Count(p => p.Value.Suppressed)} hidden; {attacked} of {protectedCells.Count} hidden counts from 1 to {t} attacked; " +
             $"narrowest range {narrowest:0.###} (setting {options.MinimumHiddenRange}) at {worst}; {clock.Elapsed.TotalSeconds:0.0} s");
         Assert.True(narrowest >= options.MinimumHiddenRange - 1e-6, $"{worst} narrowed to a range of {narrowest}");
     }
-
-    private static int StableHash(PublishedCell c) => string.Join('|', c.Kind, c.Period, c.Dimension, c.Value, c.Column)
-        .Aggregate(17, (h, ch) => unchecked(h * 31 + ch));
 
     private static string KebabName<T>(T value) where T : struct, Enum => CommunityLead.Api.Infrastructure.KebabEnum.Name(value);
 }

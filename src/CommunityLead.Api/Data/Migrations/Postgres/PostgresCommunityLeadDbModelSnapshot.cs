@@ -844,6 +844,26 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                     b.ToTable("LabResults");
                 });
 
+            modelBuilder.Entity("CommunityLead.Api.Data.Entities.ReportInputs", b =>
+                {
+                    b.Property<int>("Id")
+                        .HasColumnType("integer");
+
+                    b.Property<long>("Version")
+                        .HasColumnType("bigint");
+
+                    b.HasKey("Id");
+
+                    b.ToTable("ReportInputs");
+
+                    b.HasData(
+                        new
+                        {
+                            Id = 1,
+                            Version = 0L
+                        });
+                });
+
             modelBuilder.Entity("CommunityLead.Api.Data.Entities.Sample", b =>
                 {
                     b.Property<int>("Id")

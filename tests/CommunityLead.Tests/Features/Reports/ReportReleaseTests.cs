@@ -1,0 +1,93 @@
+using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Api.Data.Migrations;
+using CommunityLead.Rules.Households;
+using CommunityLead.Rules.Interpretation;
+using CommunityLead.Tests.Infrastructure;
+using Microsoft.EntityFrameworkCore;
+using static CommunityLead.Tests.Features.Reports.ReportSeed;
+using static CommunityLead.Tests.Infrastructure.Fixtures;
+
+namespace CommunityLead.Tests.Features.Reports;
+
+/// <summary>The protected set is decided once per version of the store's report inputs: never stale, never per request.</summary>
+public class ReportReleaseTests
+{
+    private static IEnumerable<SeedKit> Many(string area, int count, DateTime? collected = null) =>
+        Enumerable.Range(0, count).Select(_ => new SeedKit(area, Band.Low, 2, CollectedUtc: collected));
+
+    private static long Version(CommunityLeadDb db) => db.ReportInputs.AsNoTracking().Single().Version;
+
+    [Fact]
+    public void ReportInputs_EveryWriteToATableAReportReads_RaisesTheVersion()
+    {
+        using var app = new CommunityLeadFactory();
+        var before = app.WithDb(Version);
+        Add(app, Many("harbour", 2));
+        app.WithDb(db =>
+        {
+            Assert.True(Version(db) > before, "inserting households, kits, a batch and results");
+            var kit = db.Kits.AsNoTracking().First();
+            var interpretation = new KitInterpretation
+            {
+                KitId = kit.Id, KitCode = kit.Code, ProfileId = "seed", OutcomeJson = "{}", CreatedBy = "seed", CreatedAtUtc = kit.UpdatedAtUtc,
+            };
+            db.Interpretations.Add(interpretation);
+            db.SaveChanges();
+            db.Letters.Add(new IssuedLetter
+            {
+                KitId = kit.Id, KitCode = kit.Code, InterpretationId = interpretation.Id, ProfileId = "seed", ContentJson = "{}", Sha256 = "0",
+                IssuedBy = "seed", IssuedAtUtc = kit.UpdatedAtUtc,
+            });
+            var beforeLetter = Version(db);
+            db.SaveChanges();
+            Assert.True(Version(db) > beforeLetter, "inserting a letter");
+            // An update by hand, outside EF Core's change tracker, is seen all the same: the trigger is the database's.
+            foreach (var table in ReportInputTables.Names)
+            {
+                var v = Version(db);
+                // The table names are the fixed list above, never input.
+                var sql = $"""UPDATE "{table}" SET "Id" = "Id" WHERE "Id" IN (SELECT "Id" FROM "{table}" ORDER BY "Id" LIMIT 1)""";
+                db.Database.ExecuteSqlRaw(sql);
+                Assert.True(Version(db) > v, $"updating {table}");
+            }
+            var beforeDelete = Version(db);
+            db.Letters.Where(l => l.KitId == kit.Id).ExecuteDelete();
+            Assert.True(Version(db) > beforeDelete, "deleting a letter");
+            return 0;
+        });
+    }
+
+    [Fact]
+    public async Task Summary_AskedAgainAfterAWrite_CountsTheNewKits()
+    {
+        using var app = new CommunityLeadFactory();
+        Add(app, Many("harbour", 20));
+        var health = app.CreateClient(Roles.Health);
+        Assert.Equal(20, (await GetAsync(health, "/api/reports/summary"))["total"]!["kitsIssued"]!["value"]!.GetValue<int>());
+        Assert.Equal(20, (await GetAsync(health, "/api/reports/summary"))["total"]!["kitsIssued"]!["value"]!.GetValue<int>());
+        Add(app, Many("harbour", 5));
+        Assert.Equal(25, (await GetAsync(health, "/api/reports/summary"))["total"]!["kitsIssued"]!["value"]!.GetValue<int>());
+        // A change to a household (its area) moves its kit in the very next answer.
+        app.WithDb(db => db.Households.Take(12).ExecuteUpdate(s => s.SetProperty(h => h.AreaCode, "old-mill")));
+        var byArea = await GetAsync(health, "/api/reports/summary?groupBy=area");
+        Assert.Equal(12, byArea["rows"]!.AsArray().Single(r => r!["group"]!.GetValue<string>() == "old-mill")!["kitsIssued"]!["value"]!.GetValue<int>());
+    }
+
+    [Theory]
+    [InlineData("UTC", 0, 11)]
+    [InlineData("America/Chicago", 11, 0)]
+    public async Task Summary_MonthsFollowTheProgramsTimeZone(string zone, int october, int november)
+    {
+        // 2026-11-01 02:00 UTC is 31 October, 9 p.m. in Chicago (CDT, UTC−5, until 1 November): the program's own
+        // calendar puts these samples in October (IANA tz database).
+        using var app = new CommunityLeadFactory { Settings = { ["Program:TimeZone"] = zone } };
+        Add(app, Many("harbour", 11, new DateTime(2026, 11, 1, 2, 0, 0, DateTimeKind.Utc)));
+        var health = app.CreateClient(Roles.Health);
+        async Task<int> Issued(string from, string to) =>
+            (await GetAsync(health, $"/api/reports/summary?from={from}&to={to}"))["total"]!["kitsIssued"]!["value"]?.GetValue<int>() ?? 0;
+        Assert.Equal(october, await Issued("2026-10-01", "2026-10-31"));
+        Assert.Equal(november, await Issued("2026-11-01", "2026-11-30"));
+    }
+}
