@@ -50,8 +50,16 @@ public static class ReportDimensions
 
     public static TableShape ShapeFor(string[][] values) => new([.. values.Select(v => v.Length)], Shape.Leaves, Shape.ColumnLeaves);
 
-    public static TableRecord Record(ReportKit k, string[][] values) =>
-        new(k.PeriodMonth, [.. All.Select((d, i) => Array.IndexOf(values[i], d.ValueOf(k)))], Leaf(k));
+    /// <summary>Each dimension's value positions, so a kit's record is a look-up per dimension rather than a search.</summary>
+    public static Dictionary<string, int>[] Positions(string[][] values) =>
+        [.. values.Select(v => v.Select((value, i) => (value, i)).ToDictionary(x => x.value, x => x.i, StringComparer.Ordinal))];
+
+    public static TableRecord Record(ReportKit k, Dictionary<string, int>[] positions)
+    {
+        var indexes = new int[All.Length];
+        for (var i = 0; i < All.Length; i++) indexes[i] = positions[i].GetValueOrDefault(All[i].ValueOf(k), -1);
+        return new(k.PeriodMonth, indexes, Leaf(k));
+    }
 
     /// <summary>
     /// Keeps a moved kit believable: its overall band is never below its lead or copper band (the overall band is the

@@ -73,7 +73,7 @@ public static class SummaryBuilder
         Cell[] cells = [.. Enumerable.Range(0, Shape.ColumnLeaves.Length).Select(C)];
         var anyHidden = cells.Any(c => c.Suppressed);
         var stats = known && !anyHidden && kt.Table.KeptWhole(g.Node, g.D, g.V)
-            ? SummaryStatistics.Of([.. kt.Members(g.Node, g.D, g.V)], options) : GroupStatistics.None;
+            ? kt.Statistics(g.Node, g.D, g.V) : GroupStatistics.None;
         return new SummaryRow(label, cells[Issued], cells[Returned], cells[Analyzed], cells[7], null,
             new BandCells(cells[2], cells[3], cells[4], cells[5], cells[6], cells[7]), null,
             stats.Share, stats.P90, stats.Median, stats.P75, stats.DaysMedian, stats.Days90, anyHidden);

@@ -1,16 +1,35 @@
+using System.Collections.Concurrent;
 using CommunityLead.Rules.Reports.Protection;
 
 namespace CommunityLead.Api.Features.Reports;
 
 /// <summary>One kind's protected table, with the kits behind it for the statistics of groups that are shown whole.</summary>
-public sealed class KindTable(ReportKitKind kind, List<ReportKit> kits, TableRecord[] records, string[][] values, ProtectedTable table)
+public sealed class KindTable(ReportKitKind kind, List<ReportKit> kits, TableRecord[] records, string[][] values, ProtectedTable table,
+    ReportOptions options)
 {
+    // Statistics of every value of one dimension in one period, worked out in a single pass over the kits the first
+    // time any of them is asked, then kept with the decided set: a report is then a look-up, not a scan per row.
+    private readonly ConcurrentDictionary<(long Node, int Dimension), Dictionary<int, GroupStatistics>> statistics = new();
+
     public ReportKitKind Kind => kind;
     public string[][] Values => values;
     public ProtectedTable Table => table;
 
-    public IEnumerable<ReportKit> Members(long node, int dimension, int value) =>
-        kits.Where((k, i) => PeriodNode.Contains(node, records[i].Month) && (dimension < 0 || records[i].Values[dimension] == value));
+    public GroupStatistics Statistics(long node, int dimension, int value) =>
+        statistics.GetOrAdd((node, dimension), key => Split(key.Node, key.Dimension)).GetValueOrDefault(value, GroupStatistics.None);
+
+    private Dictionary<int, GroupStatistics> Split(long node, int dimension)
+    {
+        var groups = new Dictionary<int, List<ReportKit>>();
+        for (var i = 0; i < kits.Count; i++)
+        {
+            if (!PeriodNode.Contains(node, records[i].Month)) continue;
+            var value = dimension < 0 ? -1 : records[i].Values[dimension];
+            if (!groups.TryGetValue(value, out var members)) groups[value] = members = [];
+            members.Add(kits[i]);
+        }
+        return groups.ToDictionary(g => g.Key, g => SummaryStatistics.Of(g.Value, options));
+    }
 
     public IEnumerable<int> Months => records.Select(r => r.Month).Distinct().Order();
 }
@@ -23,11 +42,12 @@ public static class SummaryTables
         var values = ReportDimensions.Values(kits);
         var shape = ReportDimensions.ShapeFor(values);
         var settings = new ProtectionSettings(options.SuppressionThreshold, options.MinimumHiddenRange);
+        var positions = ReportDimensions.Positions(values);
         return Enum.GetValues<ReportKitKind>().ToDictionary(kind => kind, kind =>
         {
             var ofKind = kits.Where(k => k.Kind == kind).ToList();
-            TableRecord[] records = [.. ofKind.Select(k => ReportDimensions.Record(k, values))];
-            return new KindTable(kind, ofKind, records, values, TableProtector.Protect(records, shape, settings, ReportDimensions.Fit));
+            TableRecord[] records = [.. ofKind.Select(k => ReportDimensions.Record(k, positions))];
+            return new KindTable(kind, ofKind, records, values, TableProtector.Protect(records, shape, settings, ReportDimensions.Fit), options);
         });
     }
 }

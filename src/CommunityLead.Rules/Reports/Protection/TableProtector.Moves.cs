@@ -52,7 +52,7 @@ public sealed partial class TableProtector
             {
                 var rc = records[c];
                 if (!whole)
-                    foreach (var b in byMonth[rc.Month].Where(b => b != c && !used.Contains(b) && records[b].Values[d] == s.Value
+                    foreach (var b in WithValue(rc.Month, d, s.Value).Where(b => b != c && !used.Contains(b)
                                  && !shape.InColumn(records[b].Leaf, s.Column)).Take(4))
                         yield return [new(c, rc, rc.With(d, s.Value)), new(b, records[b], records[b].With(d, rc.Values[d]))];
                 yield return [new(c, rc, rc.With(d, s.Value))];
@@ -86,11 +86,19 @@ public sealed partial class TableProtector
 
     /// <summary>The kits counted in s (a group with no column covering every leaf counts by the cell's own leaves).</summary>
     private IEnumerable<int> Members(CellKey s) =>
-        MonthsIn(s.Node).SelectMany(m => byMonth[m]).Where(i =>
-        {
-            var r = records[i];
-            return (s.Dimension < 0 || r.Values[s.Dimension] == s.Value) && (s.Column < 0 || shape.InColumn(r.Leaf, s.Column));
-        });
+        MonthsIn(s.Node).SelectMany(m => s.Dimension < 0 ? byMonth[m] : WithValue(m, s.Dimension, s.Value))
+            .Where(i => s.Column < 0 || shape.InColumn(records[i].Leaf, s.Column));
+
+    /// <summary>
+    /// The kits of one month with one value in one dimension, split out the first time that month and dimension are
+    /// asked: a small count's kits are then found among themselves, not by reading the whole month for each move.
+    /// </summary>
+    private List<int> WithValue(int month, int dimension, int value)
+    {
+        if (!byValue.TryGetValue((month, dimension), out var split))
+            byValue[(month, dimension)] = split = byMonth[month].GroupBy(i => records[i].Values[dimension]).ToDictionary(g => g.Key, g => g.ToList());
+        return split.TryGetValue(value, out var kits) ? kits : [];
+    }
 
     private IEnumerable<int> MonthsIn(long node) => months.Where(m => PeriodNode.Contains(node, m));
 
