@@ -27,25 +27,34 @@ public static class ReportKits
 {
     public static async Task<List<ReportKit>> LoadAsync(CommunityLeadDb db, ProgramCalendar calendar, CancellationToken ct)
     {
-        var kits = await db.Kits.AsNoTracking().Select(k => new
-        {
-            k.Id, k.Kind, k.CollectedAtUtc, k.IssuedAtUtc, k.Household!.AreaCode, k.Household.WaterSource, k.Household.YearBuilt, k.Household.ServiceLine,
-            k.Household.ChildUnder6, Returned = k.ReceivedAt != null, k.Band, k.LeadBand, k.CopperBand,
-        }).ToListAsync(ct);
-        // First-draw lead (sequential bottle 1 counts as the first draw) from results in effect.
-        var lead = (await db.LabResults.AsNoTracking()
-            .Where(r => r.SupersededAtUtc == null && r.Analyte == Analyte.Lead && r.Batch!.Status != BatchStatus.Held
-                        && (r.Bottle == BottleType.FirstDraw || (r.Bottle == BottleType.Sequential && r.Position == 1)))
-            .Select(r => new { r.KitId, r.Value, Below = r.Qualifier == "<" }).ToListAsync(ct))
-            .ToLookup(r => r.KitId, r => (r.Value, r.Below));
-        var days = await db.Letters.AsNoTracking().Where(l => l.DaysFromCollection != null)
-            .GroupBy(l => l.KitId).Select(g => new { KitId = g.Key, Days = g.Min(l => l.DaysFromCollection!.Value) })
-            .ToDictionaryAsync(d => d.KitId, d => d.Days, ct);
+        var kits = await KitRows(db).ToListAsync(ct);
+        var lead = (await FirstDrawLead(db).ToListAsync(ct)).ToLookup(r => r.KitId, r => (r.Value, r.Below));
+        var days = await DaysToLetter(db).ToDictionaryAsync(d => d.KitId, d => d.Days, ct);
         return [.. kits.OrderBy(k => k.Id).Select(k => new ReportKit(
             k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, Month(calendar.DateOf(k.CollectedAtUtc ?? k.IssuedAtUtc)), k.AreaCode, k.WaterSource, k.YearBuilt,
             k.ServiceLine, k.ChildUnder6, k.Returned, k.Band, k.LeadBand, k.CopperBand,
             [.. lead[k.Id]], days.TryGetValue(k.Id, out var d) ? d : null))];
     }
+
+    // The three queries a decision reads, public so a test can ask each store for its plan (ReportQueryPlanTests).
+    public sealed record KitRow(int Id, KitKind Kind, DateTime? CollectedAtUtc, DateTime IssuedAtUtc, string AreaCode, WaterSource WaterSource,
+        int? YearBuilt, ServiceLineMaterial ServiceLine, bool ChildUnder6, bool Returned, Band? Band, Band? LeadBand, Band? CopperBand);
+    public sealed record LeadRow(int KitId, double Value, bool Below);
+    public sealed record DaysRow(int KitId, int Days);
+
+    public static IQueryable<KitRow> KitRows(CommunityLeadDb db) => db.Kits.AsNoTracking().Select(k => new KitRow(
+        k.Id, k.Kind, k.CollectedAtUtc, k.IssuedAtUtc, k.Household!.AreaCode, k.Household.WaterSource, k.Household.YearBuilt, k.Household.ServiceLine,
+        k.Household.ChildUnder6, k.ReceivedAt != null, k.Band, k.LeadBand, k.CopperBand));
+
+    /// <summary>First-draw lead (sequential bottle 1 counts as the first draw) from results in effect, not from held batches.</summary>
+    public static IQueryable<LeadRow> FirstDrawLead(CommunityLeadDb db) => db.LabResults.AsNoTracking()
+        .Where(r => r.SupersededAtUtc == null && r.Analyte == Analyte.Lead && r.Batch!.Status != BatchStatus.Held
+                    && (r.Bottle == BottleType.FirstDraw || (r.Bottle == BottleType.Sequential && r.Position == 1)))
+        .Select(r => new LeadRow(r.KitId, r.Value, r.Qualifier == "<"));
+
+    /// <summary>Days from collection to the kit's first letter.</summary>
+    public static IQueryable<DaysRow> DaysToLetter(CommunityLeadDb db) => db.Letters.AsNoTracking().Where(l => l.DaysFromCollection != null)
+        .GroupBy(l => l.KitId).Select(g => new DaysRow(g.Key, g.Min(l => l.DaysFromCollection!.Value)));
 
     /// <summary>
     /// The report month (yyyymm) of the collection, or of the issue for a kit not yet collected, on the program's own
