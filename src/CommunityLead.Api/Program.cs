@@ -2,6 +2,7 @@ using CommunityLead.Api.Commands;
 using CommunityLead.Api.Features.Admin;
 using CommunityLead.Api.Features.Areas;
 using CommunityLead.Api.Features.Attention;
+using CommunityLead.Api.Features.Calendar;
 using CommunityLead.Api.Features.Health;
 using CommunityLead.Api.Features.Households;
 using CommunityLead.Api.Features.Interpretation;
@@ -55,6 +56,7 @@ app.UseAuthorization();
 app.UseRateLimiter();
 
 app.MapHealth();
+app.MapCalendar();
 app.MapOperations();
 app.MapAreas();
 app.MapHouseholds();

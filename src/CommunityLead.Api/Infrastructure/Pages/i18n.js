@@ -4,6 +4,9 @@ const STORE = 'communitylead.language';
 const LANGUAGES = ['en', 'es'];
 let strings = {};
 let current = 'en';
+// The program's time zone (Program:TimeZone): every date and time on a page is read on the program's calendar, so
+// staff in another zone, or a laptop set wrongly, see the same dates the letters print.
+let zone;
 
 export function language() { return current; }
 
@@ -13,8 +16,9 @@ export async function loadStrings() {
   const browser = (navigator.language || 'en').slice(0, 2);
   current = [asked, saved, browser].find(l => LANGUAGES.includes(l)) || 'en';
   if (asked && LANGUAGES.includes(asked)) localStorage.setItem(STORE, asked);
-  const response = await fetch(`/ui/strings.${current}.json`);
+  const [response, calendar] = await Promise.all([fetch(`/ui/strings.${current}.json`), fetch('/api/calendar').catch(() => null)]);
   strings = await response.json();
+  zone = calendar?.ok ? (await calendar.json()).timeZone : undefined;
   document.documentElement.lang = current;
 }
 
@@ -45,5 +49,10 @@ export function formatNumber(value, digits = 0) {
 }
 
 export function formatDate(iso) {
-  return new Intl.DateTimeFormat(current, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(iso));
+  const style = { dateStyle: 'medium', timeStyle: 'short' };
+  try {
+    return new Intl.DateTimeFormat(current, { ...style, timeZone: zone }).format(new Date(iso));
+  } catch {
+    return new Intl.DateTimeFormat(current, style).format(new Date(iso)); // a zone this browser does not know
+  }
 }
