@@ -156,6 +156,17 @@ internal sealed class PerformanceTable(bool quick)
         using var server = await Served.ServiceAsync(database);
         using var client = server.Client(health);
         var idle = server.Process.Memory();
+        // The first report after a change decides the protected set over every kit (ReportRelease); the reports after
+        // it, until the next write, are look-ups in that set. Both are figures a health department will meet.
+        var first = Stopwatch.StartNew();
+        using (var response = await client.GetAsync("/api/reports/summary?groupBy=area"))
+        {
+            await response.Content.ReadAsByteArrayAsync();
+            if (response.StatusCode != HttpStatusCode.OK) throw new InvalidOperationException($"summary: {(int)response.StatusCode}");
+        }
+        var areaBaseline = Baselines.GroupByCount(database, "h.AreaCode");
+        Add($"health summary over {kits:N0} kits: the first report after a change (decides the protected set)", Ms(first.Elapsed),
+            $"{Ms(areaBaseline)} (one hand-written GROUP BY count on the file)", Ratio(first.Elapsed, areaBaseline), "≤ 500 ms");
         foreach (var (groupBy, column) in new[] { ("area", "h.AreaCode"), ("month", "k.PeriodMonth"), ("band", "k.LeadBand") })
         {
             var times = new List<TimeSpan>();
@@ -168,7 +179,7 @@ internal sealed class PerformanceTable(bool quick)
                 times.Add(clock.Elapsed);
             }
             var baseline = Baselines.GroupByCount(database, column);
-            Add($"health summary over {kits:N0} kits ({kits * 2:N0} results) by {groupBy} (median of 3)", Ms(Median(times)),
+            Add($"  then by {groupBy}, until the next write (median of 3)", Ms(Median(times)),
                 $"{Ms(baseline)} (one hand-written GROUP BY count on the file)", Ratio(Median(times), baseline), "≤ 500 ms");
         }
         Add("  peak memory of the summaries above idle", Mb(server.Process.PeakMemory() - idle), "", "", "bounded");
