@@ -30,6 +30,7 @@ public static class ServiceSetup
         services.AddSingleton<Features.Results.ResultSecrets>();
         services.AddSingleton<Features.Results.ResultThrottle>();
         services.AddSingleton<Features.Reports.ReportRelease>();
+        services.AddHostedService<Features.Reports.ReportReleaseInBackground>();
         services.Configure<JsonOptions>(o => JsonSetup.Configure(o.SerializerOptions));
         // Binding failures (bad JSON, wrong content type) are thrown so the handler below can name the field.
         services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);

@@ -61,6 +61,7 @@ public static class SettingsChecks
         {
             p.AtLeast(s.SuppressionThreshold, 0, nameof(s.SuppressionThreshold));
             p.AtLeast(s.MinimumHiddenRange, 1, nameof(s.MinimumHiddenRange));
+            p.Check(s.DecideInBackgroundEvery >= TimeSpan.Zero, nameof(s.DecideInBackgroundEvery), "cannot be negative (0 turns it off)", s.DecideInBackgroundEvery);
             p.Check(Enum.IsDefined(s.NinetiethRounding), nameof(s.NinetiethRounding),
                 $"must be one of {string.Join(", ", Enum.GetNames<Rules.Reports.NinetiethRounding>())}", s.NinetiethRounding);
         });

@@ -18,6 +18,7 @@ public static class RouteTable
     public static readonly IReadOnlyDictionary<string, RouteExpectation> Expectations = new Dictionary<string, RouteExpectation>
     {
         ["GET /health"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health")),
+        ["GET /api/calendar"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/api/calendar")),
         ["* /health/live"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health/live")),
         ["* /health/ready"] = RouteExpectation.Open(HttpStatusCode.OK, _ => Send(HttpMethod.Get, "/health/ready")),
 

@@ -54,6 +54,8 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
         ["RateLimits:FailedSignInsPerKeyId"] = "100000",
         ["RateLimits:LabBatchesPerKey"] = "100000",
         ["RateLimits:LetterBatchesPerKey"] = "100000",
+        // Off unless a test asks for it: a look in the background must not race a test's own requests or its end.
+        ["Reports:DecideInBackgroundEvery"] = "00:00:00",
     };
     public string DatabaseFile => Path.Combine(folder, "test.db");
     public string ConnectionString { get; }

@@ -16,4 +16,10 @@ public sealed class ReportOptions
     public NinetiethRounding NinetiethRounding { get; set; } = NinetiethPercentile.DefaultRounding;
     /// <summary>Exactly five samples: the mean of the two highest (the rule for systems serving 100 people or fewer).</summary>
     public bool FiveSampleRule { get; set; } = true;
+    /// <summary>
+    /// How often the service looks, in the background, whether the store changed since the protected set was decided,
+    /// and decides it again if so, so a report seldom waits for it. Zero turns the background look off: the first
+    /// report after a change then decides the set itself.
+    /// </summary>
+    public TimeSpan DecideInBackgroundEvery { get; set; } = TimeSpan.FromSeconds(30);
 }

@@ -17,6 +17,9 @@ public sealed class ReportRelease(IOptions<ReportOptions> options, ProgramCalend
 
     private sealed record Decided(long Version, Dictionary<ReportKitKind, KindTable> Tables);
 
+    /// <summary>The version of the report inputs the set held now was decided on (null before the first decision).</summary>
+    public long? DecidedVersion => current?.Version;
+
     public async Task<Dictionary<ReportKitKind, KindTable>> TablesAsync(CommunityLeadDb db, CancellationToken ct)
     {
         var version = await VersionAsync(db, ct);

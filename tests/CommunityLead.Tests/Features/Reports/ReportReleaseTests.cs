@@ -2,10 +2,12 @@ using CommunityLead.Api.Auth;
 using CommunityLead.Api.Data;
 using CommunityLead.Api.Data.Entities;
 using CommunityLead.Api.Data.Migrations;
+using CommunityLead.Api.Features.Reports;
 using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using CommunityLead.Tests.Infrastructure;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.DependencyInjection;
 using static CommunityLead.Tests.Features.Reports.ReportSeed;
 using static CommunityLead.Tests.Infrastructure.Fixtures;
 
@@ -89,5 +91,23 @@ public class ReportReleaseTests
             (await GetAsync(health, $"/api/reports/summary?from={from}&to={to}"))["total"]!["kitsIssued"]!["value"]?.GetValue<int>() ?? 0;
         Assert.Equal(october, await Issued("2026-10-01", "2026-10-31"));
         Assert.Equal(november, await Issued("2026-11-01", "2026-11-30"));
+    }
+
+    [Fact]
+    public async Task ReportRelease_AfterAWrite_DecidedInTheBackgroundBeforeAnyReportAsks()
+    {
+        using var app = new CommunityLeadFactory { Settings = { ["Reports:DecideInBackgroundEvery"] = "00:00:00.200" } };
+        Add(app, Many("harbour", 12));
+        var release = app.Services.GetRequiredService<ReportRelease>();
+        var version = app.WithDb(Version);
+        // Nothing has asked for a report: the set is decided for the version all the same, within a few looks.
+        var waited = System.Diagnostics.Stopwatch.StartNew();
+        while (release.DecidedVersion != version && waited.Elapsed < TimeSpan.FromSeconds(20)) await Task.Delay(50);
+        Assert.Equal(version, release.DecidedVersion);
+        Add(app, Many("harbour", 3));
+        var later = app.WithDb(Version);
+        waited.Restart();
+        while (release.DecidedVersion != later && waited.Elapsed < TimeSpan.FromSeconds(20)) await Task.Delay(50);
+        Assert.Equal(later, release.DecidedVersion);
     }
 }
