@@ -21,17 +21,24 @@ public sealed class KindTable(ReportKitKind kind, List<ReportKit> kits, TableRec
     private Dictionary<int, GroupStatistics> Split(long node, int dimension)
     {
         var groups = new Dictionary<int, List<ReportKit>>();
-        for (var i = 0; i < kits.Count; i++)
+        foreach (var (month, indexes) in byMonth)
         {
-            if (!PeriodNode.Contains(node, records[i].Month)) continue;
-            var value = dimension < 0 ? -1 : records[i].Values[dimension];
-            if (!groups.TryGetValue(value, out var members)) groups[value] = members = [];
-            members.Add(kits[i]);
+            if (!PeriodNode.Contains(node, month)) continue;
+            foreach (var i in indexes)
+            {
+                var value = dimension < 0 ? -1 : records[i].Values[dimension];
+                if (!groups.TryGetValue(value, out var members)) groups[value] = members = [];
+                members.Add(kits[i]);
+            }
         }
         return groups.ToDictionary(g => g.Key, g => SummaryStatistics.Of(g.Value, options));
     }
 
-    public IEnumerable<int> Months => records.Select(r => r.Month).Distinct().Order();
+    // A month's kits, so a month's or a quarter's statistics read only that period's kits.
+    private readonly Dictionary<int, List<int>> byMonth = Enumerable.Range(0, records.Length).GroupBy(i => records[i].Month)
+        .ToDictionary(g => g.Key, g => g.ToList());
+
+    public IEnumerable<int> Months => byMonth.Keys.Order();
 }
 
 /// <summary>The protected table set: decided once over every kit in the store, then every answer is a look-up in it.</summary>
