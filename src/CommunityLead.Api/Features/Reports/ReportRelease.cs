@@ -8,32 +8,42 @@ namespace CommunityLead.Api.Features.Reports;
 /// <summary>
 /// The protected table set of the store as it is now, decided once per version of the report's inputs
 /// (ReportInputs.Version, raised by the database's triggers on every write to what a report counts) instead of on
-/// every request. Deciding is deterministic, so two instances holding the same version hold the same decision.
+/// every request. Deciding is deterministic: instances of the same release with the same settings, holding the same
+/// version, hold the same decision.
 /// </summary>
-public sealed class ReportRelease(IOptions<ReportOptions> options, ProgramCalendar calendar)
+public sealed class ReportRelease(IOptions<ReportOptions> options, ProgramCalendar calendar, IHostApplicationLifetime lifetime)
 {
     private readonly SemaphoreSlim deciding = new(1, 1);
+    // The last set decided with no write while its kits were read: the one kept for look-ups.
     private volatile Decided? current;
+    // The last set decided at all, with the version read before its kits were: a request that found an older version
+    // than that asked before the decision began, so that set is no older than its question, whatever came after.
+    private volatile Decided? latest;
 
     private sealed record Decided(long Version, Dictionary<ReportKitKind, KindTable> Tables);
 
-    /// <summary>The version of the report inputs the set held now was decided on (null before the first decision).</summary>
+    /// <summary>The version of the report inputs the kept set was decided on (null before the first decision).</summary>
     public long? DecidedVersion => current?.Version;
 
     public async Task<Dictionary<ReportKitKind, KindTable>> TablesAsync(CommunityLeadDb db, CancellationToken ct)
     {
-        var version = await VersionAsync(db, ct);
-        if (current is { } hit && hit.Version == version) return hit.Tables;
-        // One decision at a time: requests arriving while the store's set is decided wait for it rather than each
-        // reading every kit again.
+        var asked = await VersionAsync(db, ct);
+        if (current is { } hit && hit.Version == asked) return hit.Tables;
+        // One decision at a time: requests arriving while the set is decided wait for it rather than each reading
+        // every kit again.
         await deciding.WaitAsync(ct);
         try
         {
-            version = await VersionAsync(db, ct);
-            if (current is { } decided && decided.Version == version) return decided.Tables;
-            var tables = SummaryTables.Protect(await ReportKits.LoadAsync(db, calendar, ct), options.Value);
+            if (current is { } kept && kept.Version == asked) return kept.Tables;
+            if (latest is { } newer && newer.Version >= asked) return newer.Tables;
+            // The work is shared by everyone waiting, so no single request's hanging up may cancel it; only stopping does.
+            var stopping = lifetime.ApplicationStopping;
+            var before = await VersionAsync(db, stopping);
+            var tables = SummaryTables.Protect(await ReportKits.LoadAsync(db, calendar, stopping), options.Value);
+            var decided = new Decided(before, tables);
+            latest = decided;
             // Kept only if nothing was written while the kits were read: then what was read is exactly that version.
-            if (await VersionAsync(db, ct) == version) current = new Decided(version, tables);
+            if (await VersionAsync(db, stopping) == before) current = decided;
             return tables;
         }
         finally

@@ -15,8 +15,10 @@ public sealed class KindTable(ReportKitKind kind, List<ReportKit> kits, TableRec
     public string[][] Values => values;
     public ProtectedTable Table => table;
 
-    public GroupStatistics Statistics(long node, int dimension, int value) =>
-        statistics.GetOrAdd((node, dimension), key => Split(key.Node, key.Dimension)).GetValueOrDefault(value, GroupStatistics.None);
+    /// <summary>A group's statistics, or none when the other possible sets of kits give it other members.</summary>
+    public GroupStatistics Statistics(long node, int dimension, int value) => !table.KeptWhole(node, dimension, value)
+        ? GroupStatistics.None
+        : statistics.GetOrAdd((node, dimension), key => Split(key.Node, key.Dimension)).GetValueOrDefault(value, GroupStatistics.None);
 
     private Dictionary<int, GroupStatistics> Split(long node, int dimension)
     {
