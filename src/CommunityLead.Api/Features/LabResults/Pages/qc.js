@@ -4,9 +4,12 @@ import { t } from '/ui/shell.js';
 import { el } from '/ui/dom.js';
 import { formatNumber } from '/ui/i18n.js';
 
-function window(c) {
-  if (c.low == null && c.high == null) return '';
-  return `${c.low != null ? formatNumber(c.low, 2) : '—'} – ${c.high != null ? formatNumber(c.high, 2) : '—'}`;
+/** A window with both ends as "low – high"; with one end as a bound ("≥ 1", "≤ 0.5"); none for a figure only reported. */
+function bounds(c) {
+  if (c.low != null && c.high != null) return `${formatNumber(c.low, 2)} – ${formatNumber(c.high, 2)}`;
+  if (c.low != null) return `≥ ${formatNumber(c.low, 2)}`;
+  if (c.high != null) return `≤ ${formatNumber(c.high, 2)}`;
+  return '';
 }
 
 export function qcTable(checks, caption = t('lab.qcCaption')) {
@@ -16,7 +19,7 @@ export function qcTable(checks, caption = t('lab.qcCaption')) {
     el('tbody', {}, checks.map(c => el('tr', { class: c.passed ? null : 'failed' },
       el('td', {}, `${c.type ?? ''} ${c.analyte ?? ''} ${c.figure ?? ''}`.trim()),
       el('td', { class: 'num' }, typeof c.value === 'number' ? formatNumber(c.value, 2) : ''),
-      el('td', { class: 'num' }, window(c)),
+      el('td', { class: 'num' }, bounds(c)),
       el('td', {}, c.passed ? t('lab.yes') : el('strong', {}, t('lab.no'))),
       el('td', {}, c.detail ?? ''))))));
 }

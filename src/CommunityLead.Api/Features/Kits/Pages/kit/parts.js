@@ -19,9 +19,9 @@ function bottleName(s) {
 export function timeline(kit, letters) {
   const events = (kit.history || []).map(h => {
     const what = word('action', h.action);
-    // "Received → Received" says nothing twice: the new state only where it is news.
-    const to = h.to ? word('state', h.to) : null;
-    return { at: h.at, what, to: to && to !== what ? to : null, note: h.reason };
+    // Each named action says where the kit went ("Received"): the new state only beside an action without a name.
+    const to = h.to && what === h.action ? word('state', h.to) : null;
+    return { at: h.at, what, to, note: h.reason };
   });
   if (!kit.history) events.push({ at: kit.issuedAt, what: word('action', 'issue') });
   for (const l of letters) {
@@ -63,7 +63,8 @@ export function results(meaning) {
       el('td', { 'data-label': t('kit.analyte') }, word('analyte', f.analyte)),
       el('td', { 'data-label': t('kit.value'), class: 'num' }, value(f)),
       el('td', { 'data-label': t('kit.level') }, f.levelValue != null ? `${formatNumber(f.levelValue, 1)} ${f.unit}` : '—',
-        f.levelMeaning ? el('span', { class: 'hint' }, f.levelMeaning) : null),
+        // The profiles word their levels in English only: marked so, for a reader on the Spanish page.
+        f.levelMeaning ? el('span', { class: 'hint', lang: 'en' }, f.levelMeaning) : null),
       el('td', { 'data-label': t('kit.band') }, el('span', { class: `tag ${f.band}` }, word('band', f.band))))))));
 }
 

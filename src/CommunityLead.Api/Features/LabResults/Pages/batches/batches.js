@@ -14,7 +14,7 @@ function releaseForm(batch, index, onReleased) {
   const form = el('form', { 'aria-label': t('batches.releaseFor', { id: batch.batchId }) },
     el('label', { for: id }, t('batches.reason'), el('span', { class: 'hint' }, t('batches.reasonHint'))),
     reason,
-    el('button', { type: 'submit' }, t('batches.release')),
+    el('div', {}, el('button', { type: 'submit' }, t('batches.release'))),
     status);
   form.addEventListener('submit', async event => {
     event.preventDefault();
@@ -38,7 +38,7 @@ function card(detail, index) {
       el('p', { class: 'status ok' }, t('batches.released', { id: outcome.batchId, version: outcome.version })));
     say(byId('status'), t('batches.released', { id: outcome.batchId, version: outcome.version }));
   };
-  article.append(
+  article.append(...[
     el('header', {},
       el('h2', { id: `${id}-title` }, el('span', { class: 'code' }, b.batchId)),
       el('span', {}, t('batches.version', { version: b.version })),
@@ -51,7 +51,7 @@ function card(detail, index) {
       download(`/api/lab/batches/${encodeURIComponent(b.batchId)}/qc-report`, `qc-${b.batchId}.pdf`).catch(e => report(e, status)) },
       t('batches.qcReport')),
     status,
-    releaseForm(b, index, released));
+    releaseForm(b, index, released)].filter(Boolean));
   return article;
 }
 
