@@ -84,17 +84,25 @@ public class ConsoleWalkTests
         Assert.Equal(code, sheet.Decode(BarcodeFormat.CODE_128, stock.Left + stock.LabelWidth * 0.38, stock.Top, stock.LabelWidth * 0.62, stock.LabelHeight));
         Assert.Equal(code, sheet.Decode(BarcodeFormat.QR_CODE, stock.Left, stock.Top, stock.LabelWidth * 0.42, stock.LabelHeight));
 
-        // The household fills the bottles; receipt by "scanner": a typo first, then the code, each followed by Enter.
-        // The browser's service runs on the real clock and the kit was issued just now: the bottles are filled after it.
-        var filled = DateTimeOffset.UtcNow;
-        await PostAsync(coordinator, $"/api/kits/{code}/collection", new
-        {
-            samples = new object[]
-            {
-                new { bottle = "first-draw", volumeMl = 1000, collectedAt = filled.ToString("O"), waterLastUsedAt = filled.AddHours(-8).ToString("O"), tap = "kitchen" },
-                new { bottle = "flushed", volumeMl = 1000, collectedAt = filled.AddSeconds(20).ToString("O"), flushSeconds = 120 },
-            },
-        }, System.Net.HttpStatusCode.OK);
+        // The household's collection form, typed in on the kit's page. The kit was issued on the real clock just now:
+        // its bottles are dated from the issue the service recorded (to the second), never from the minute on the clock.
+        var issued = DateTime.Parse((await GetAsync(coordinator, $"/api/kits/{code}"))["issuedAt"]!.GetValue<string>(),
+            System.Globalization.CultureInfo.InvariantCulture, System.Globalization.DateTimeStyles.AdjustToUniversal | System.Globalization.DateTimeStyles.AssumeUniversal);
+        static string Typed(DateTime t) => t.ToString("yyyy-MM-dd'T'HH:mm:ss", System.Globalization.CultureInfo.InvariantCulture);
+        await page.GetByRole(AriaRole.Link, new() { Name = "Open its page" }).ClickAsync();
+        await page.GetByLabel("Water last used before the first draw").FillAsync(Typed(issued.AddSeconds(2).AddHours(-8)));
+        await page.Locator("#c-first-at").FillAsync(Typed(issued.AddSeconds(2)));
+        await page.GetByLabel("Tap", new() { Exact = true }).SelectOptionAsync("kitchen");
+        await page.GetByLabel("Tap ran first (seconds)").FillAsync("120");
+        await page.Locator("#c-flushed-at").FillAsync(Typed(issued.AddSeconds(30)));
+        await page.GetByRole(AriaRole.Button, new() { Name = "Record the bottles" }).ClickAsync();
+        await Expect(page.Locator("#status")).ToContainTextAsync("The bottles are recorded");
+        await Expect(page.Locator("#kit-state")).ToHaveTextAsync("Collected");
+        await Expect(page.Locator("#bottles")).ToContainTextAsync("water stood 8.0 h");
+        await browser.CheckAsync("04-kit-collected-en");
+
+        // Receipt by "scanner": a typo first, then the code, each followed by Enter.
+        await page.GotoAsync("/ui/kits/");
         var scan = page.GetByLabel("Kit code").First;
         await scan.FocusAsync();
         await scan.PressSequentiallyAsync(LabFixtures.Mistyped(code));
@@ -107,10 +115,12 @@ public class ConsoleWalkTests
         await browser.CheckAsync("04-kits-receipt-en");
 
         // The lab, in a tab of its own: a bad CSV first (its problems beside its rows), then the corrected one. The
-        // analysis is dated a minute after the receipt the service recorded (typed to the minute, so never before it).
-        var received = DateTimeOffset.Parse((await GetAsync(coordinator, $"/api/kits/{code}"))["receivedAt"]!.GetValue<string>(),
-            System.Globalization.CultureInfo.InvariantCulture);
-        var analyzed = received.UtcDateTime.AddMinutes(1).ToString("yyyy-MM-dd'T'HH:mm", System.Globalization.CultureInfo.InvariantCulture);
+        // analysis is dated a minute after the receipt and bottles the service recorded (typed to the minute, so never
+        // before them, and never more than a minute ahead of the service's clock).
+        var kit = await GetAsync(coordinator, $"/api/kits/{code}");
+        var latest = kit["samples"]!.AsArray().Select(s => s!["collectedAt"]!.GetValue<string>()).Append(kit["receivedAt"]!.GetValue<string>())
+            .Max(t => DateTimeOffset.Parse(t, System.Globalization.CultureInfo.InvariantCulture));
+        var analyzed = latest.UtcDateTime.AddMinutes(1).ToString("yyyy-MM-dd'T'HH:mm", System.Globalization.CultureInfo.InvariantCulture);
         await browser.NewContextAsync(1280, 900);
         page = browser.Page;
         await page.GotoAsync("/ui/lab/");

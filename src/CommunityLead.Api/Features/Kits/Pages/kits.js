@@ -53,6 +53,7 @@ async function issue(event) {
   try {
     const kit = await api('/api/kits', { method: 'POST', body: { householdId: household.id, kind: byId('issue-kind').value } });
     say(status, t('kits.issued', { code: kit.code, name: household.name }));
+    status.append(' ', el('a', { href: `kit/?code=${encodeURIComponent(kit.code)}` }, t('kits.openKit')));
     const label = byId('issued-label');
     label.hidden = false;
     label.onclick = () => download(`/api/kits/labels?stock=${byId('labels-stock').value}&codes=${encodeURIComponent(kit.code)}`, `kit-label-${kit.code}.pdf`)

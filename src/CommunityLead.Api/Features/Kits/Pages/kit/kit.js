@@ -6,6 +6,7 @@ import { el, byId, say } from '/ui/dom.js';
 import { formatDate } from '/ui/i18n.js';
 import { letterWords } from '/ui/result/words.js';
 import { bottles, meaningView, results, timeline, word } from './parts.js';
+import { showCollection } from './collection.js';
 
 const HAS_LETTER = ['interpreted', 'letter-sent', 'closed'];
 const code = new URLSearchParams(location.search).get('code') || '';
@@ -82,6 +83,11 @@ async function load({ keepStatus = false } = {}) {
   byId('letter-sent').hidden = kit.state !== 'interpreted' || !letters.length;
   if (!keepStatus) say(byId('letter-status'), HAS_LETTER.includes(kit.state) ? '' : t('kit.noLetterYet'), 'warn');
   if (letters.length) await preview(letters[letters.length - 1]);
+  showCollection(kit, async message => {
+    await load();
+    say(byId('status'), message);
+    byId('bottles-title').scrollIntoView();
+  });
 }
 
 startPage({
