@@ -9,7 +9,7 @@ namespace CommunityLead.Tests.Browser;
 
 /// <summary>
 /// The coordinator's desk pages beside the day's walk: the letter batch and marking letters sent, a held lab batch
-/// released with a reason, and the area list; each read by axe in both languages, on a laptop and on a phone.
+/// released with a reason, the area list, and an issued kit's collection form; each read by axe in both languages, on a laptop and on a phone.
 /// </summary>
 // Pages, the API description and the README are the same whichever store is behind them: the PostgreSQL run
 // of .ci/run leaves these out (Store=Independent).
@@ -30,6 +30,7 @@ public class CoordinatorPagesTests
         var (ready, _) = await setup.LetterAsync();
         var held = await setup.InterpretedKitAsync(firstDrawLead: 150);
         var batch = await setup.BatchAsync(calibrationMeasured: 15);
+        var issued = await setup.KitAsync();
 
         // Every page first as it reads, in English and Spanish, on a laptop and on a phone.
         foreach (var (width, height, screen) in new[] { (1280, 900, "laptop"), (375, 812, "phone") })
@@ -53,6 +54,9 @@ public class CoordinatorPagesTests
                 await Expect(page.Locator("#results td").First).ToBeVisibleAsync();
                 await browser.CheckAsync($"43-kit-held-{screen}-{language}");
                 Assert.True(await page.EvaluateAsync<bool>("document.documentElement.scrollWidth <= window.innerWidth"), $"{screen} {language}: wider than the screen");
+                await page.GotoAsync($"/ui/kits/kit/?lang={language}&code={issued}");
+                await Expect(page.Locator("#collection-form")).ToBeVisibleAsync();
+                await browser.CheckAsync($"43-kit-issued-{screen}-{language}");
             }
         }
 
@@ -73,6 +77,15 @@ public class CoordinatorPagesTests
         await Expect(desk.Locator("#status")).ToHaveTextAsync("1 of 1 letter(s) marked sent.");
         await Expect(desk.Locator($"tr[data-code='{ready}'] .outcome")).ToHaveTextAsync("Letter sent");
         await browser.CheckAsync("44-letters-marked-en");
+
+        // The collection form sent empty: refused, said in place, nothing recorded.
+        await desk.GotoAsync($"/ui/kits/kit/?code={issued}");
+        await desk.GetByRole(AriaRole.Button, new() { Name = "Record the bottles" }).ClickAsync();
+        await Expect(desk.Locator("#collection-status")).ToContainTextAsync("First draw:");
+        await Expect(desk.Locator("#collection-status")).ToContainTextAsync("Flushed:");
+        await browser.CheckAsync("44-kit-collection-refused-en");
+        await desk.ReloadAsync();
+        await Expect(desk.Locator("#kit-state")).ToHaveTextAsync("Issued");
 
         // The held batch: every QC figure and its window, the failed one marked; released with a reason.
         await desk.GotoAsync("/ui/lab/batches/");

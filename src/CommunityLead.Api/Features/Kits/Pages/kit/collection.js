@@ -2,8 +2,8 @@
 // when each bottle was filled, when the water was last used before the first draw, which tap, how long it ran.
 // Sequential and soil kits have more bottles than this form: they are recorded through the API.
 import { t, report } from '/ui/shell.js';
-import { api } from '/ui/session.js';
-import { byId } from '/ui/dom.js';
+import { api, ApiError } from '/ui/session.js';
+import { byId, say } from '/ui/dom.js';
 import { withOffset } from '/ui/times.js';
 
 function number(id) {
@@ -29,6 +29,14 @@ export function showCollection(kit, onRecorded) {
     try {
       await api(`/api/kits/${encodeURIComponent(kit.code)}/collection`, { method: 'POST', body: { samples } });
       await onRecorded(t('kit.collectionRecorded'));
-    } catch (error) { report(error, byId('collection-status')); }
+    } catch (error) {
+      const fields = error instanceof ApiError && error.status === 400 ? Object.entries(error.problem.errors || {}) : [];
+      if (!fields.length) { report(error, byId('collection-status')); return; }
+      // "samples[1].collectedAt" names a bottle by its place in the list: said with the bottle's name instead.
+      say(byId('collection-status'), fields.map(([key, messages]) => {
+        const bottle = /samples\[(\d+)\]/i.exec(key);
+        return `${bottle ? `${t(`bottle.${samples[Number(bottle[1])]?.bottle}`)}: ` : ''}${messages.join(' ')}`;
+      }).join(' '), 'error');
+    }
   });
 }
