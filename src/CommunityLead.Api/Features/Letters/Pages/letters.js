@@ -11,7 +11,7 @@ const HOLDS_LETTER = ['urgent', 'implausible'];
 function row(kit, held) {
   const id = `sent-${kit.code}`;
   return el('tr', { 'data-code': kit.code },
-    el('td', {}, held ? '' : el('input', { type: 'checkbox', id, name: 'sent', value: kit.code, 'aria-label': t('letters.tick', { code: kit.code }) })),
+    el('td', { 'data-label': held ? null : t('letters.sent') }, held ? '' : el('input', { type: 'checkbox', id, name: 'sent', value: kit.code, 'aria-label': t('letters.tick', { code: kit.code }) })),
     el('td', { 'data-label': t('kits.code') }, el('a', { class: 'code', href: `/ui/kits/kit/?code=${encodeURIComponent(kit.code)}` }, kit.code)),
     el('td', { 'data-label': t('households.area') }, kit.areaCode),
     el('td', { 'data-label': t('kits.updated') }, formatDate(kit.updatedAt)),
