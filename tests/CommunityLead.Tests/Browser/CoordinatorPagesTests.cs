@@ -44,16 +44,19 @@ public class CoordinatorPagesTests
                 await page.GotoAsync($"/ui/letters/?lang={language}");
                 await Expect(page.Locator($"tr[data-code='{held}']")).ToBeVisibleAsync();
                 await browser.CheckAsync($"40-letters-{screen}-{language}");
+                await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/lab/batches/?lang={language}");
                 await Expect(page.Locator("article.kit-card")).ToHaveCountAsync(1);
                 await browser.CheckAsync($"41-batches-{screen}-{language}");
+                await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/areas/?lang={language}");
                 await Expect(page.Locator("#areas tbody tr")).ToHaveCountAsync(browser.App.Areas.Length);
                 await browser.CheckAsync($"42-areas-{screen}-{language}");
+                await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/kits/kit/?lang={language}&code={held}");
                 await Expect(page.Locator("#results td").First).ToBeVisibleAsync();
                 await browser.CheckAsync($"43-kit-held-{screen}-{language}");
-                Assert.True(await page.EvaluateAsync<bool>("document.documentElement.scrollWidth <= window.innerWidth"), $"{screen} {language}: wider than the screen");
+                await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/kits/kit/?lang={language}&code={issued}");
                 await Expect(page.Locator("#collection-form")).ToBeVisibleAsync();
                 await browser.CheckAsync($"43-kit-issued-{screen}-{language}");
@@ -115,6 +118,10 @@ public class CoordinatorPagesTests
         var areas = await coordinator.GetStringAsync("/api/areas");
         Assert.Matches(new Regex("\"code\":\"north\",\"name\":\"[^\"]+\",\"active\":false"), areas);
     }
+
+    /// <summary>Nothing wider than the screen: long codes wrap, wide tables stack.</summary>
+    private static async Task FitsAsync(IPage page, string what) =>
+        Assert.True(await page.EvaluateAsync<bool>("document.documentElement.scrollWidth <= window.innerWidth"), $"{page.Url} ({what}): wider than the screen");
 
     private static ILocatorAssertions Expect(ILocator locator) => Assertions.Expect(locator);
 }

@@ -13,13 +13,13 @@ function bounds(c) {
 }
 
 export function qcTable(checks, caption = t('lab.qcCaption')) {
-  return el('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-label': caption }, el('table', {},
+  return el('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-label': caption }, el('table', { class: 'stack' },
     el('caption', {}, caption),
     el('thead', {}, el('tr', {}, ['lab.qcCheck', 'lab.qcValue', 'lab.qcWindow', 'lab.qcPassed', 'lab.qcDetail'].map(k => el('th', { scope: 'col' }, t(k))))),
     el('tbody', {}, checks.map(c => el('tr', { class: c.passed ? null : 'failed' },
-      el('td', {}, `${c.type ?? ''} ${c.analyte ?? ''} ${c.figure ?? ''}`.trim()),
-      el('td', { class: 'num' }, typeof c.value === 'number' ? formatNumber(c.value, 2) : ''),
-      el('td', { class: 'num' }, bounds(c)),
-      el('td', {}, c.passed ? t('lab.yes') : el('strong', {}, t('lab.no'))),
-      el('td', {}, c.detail ?? ''))))));
+      el('td', { 'data-label': t('lab.qcCheck') }, `${c.type ?? ''} ${c.analyte ?? ''} ${c.figure ?? ''}`.trim()),
+      el('td', { 'data-label': t('lab.qcValue'), class: 'num' }, typeof c.value === 'number' ? formatNumber(c.value, 2) : ''),
+      el('td', { 'data-label': t('lab.qcWindow'), class: 'num' }, bounds(c)),
+      el('td', { 'data-label': t('lab.qcPassed') }, c.passed ? t('lab.yes') : el('strong', {}, t('lab.no'))),
+      el('td', { 'data-label': t('lab.qcDetail') }, c.detail ?? ''))))));
 }
