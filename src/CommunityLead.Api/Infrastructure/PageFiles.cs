@@ -17,6 +17,8 @@ public static class PageFiles
         ("/ui/today", "Features/Attention/Pages"),
         ("/ui/households", "Features/Households/Pages"),
         ("/ui/kits", "Features/Kits/Pages"),
+        ("/ui/letters", "Features/Letters/Pages"),
+        ("/ui/areas", "Features/Areas/Pages"),
         ("/ui/lab", "Features/LabResults/Pages"),
         ("/ui/result", "Features/Results/Pages"),
         ("/ui/health", "Features/Reports/Pages"),

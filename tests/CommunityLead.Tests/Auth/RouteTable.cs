@@ -84,6 +84,8 @@ public static class RouteTable
             async s => Send(HttpMethod.Get, $"/api/kits/{(await s.LetterAsync()).Code}/letters")),
         ["GET /api/letters/{id:int}"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/letters/{(await s.LetterAsync()).Id}")),
+        ["GET /api/letters/{id:int}/words"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/letters/{(await s.LetterAsync()).Id}/words")),
         ["POST /api/letters/batch"] = Coordinator(HttpStatusCode.OK, _ => Send(HttpMethod.Post, "/api/letters/batch")),
 
         ["GET /api/kits/{code}/interpretation/"] = Coordinator(HttpStatusCode.OK,

@@ -36,12 +36,20 @@ public sealed partial class BrowserApp : IAsyncDisposable
     public static string ScreenshotFolder { get; } = Environment.GetEnvironmentVariable("COMMUNITYLEAD_SCREENSHOTS")
         ?? Path.Combine(AppContext.BaseDirectory, "artifacts", "screens");
 
-    public static async Task<BrowserApp> StartAsync(int width = 1280, int height = 900, Action<CommunityLeadFactory>? configure = null)
+    /// <param name="fixedClock">The service's clock, stopped at this time, for pages that type no time of their own;
+    /// by default the service follows the real clock as the browser does.</param>
+    public static async Task<BrowserApp> StartAsync(int width = 1280, int height = 900, Action<CommunityLeadFactory>? configure = null,
+        DateTimeOffset? fixedClock = null)
     {
         var port = FreePort();
-        // The browser stamps times from the real clock (a receipt "now"), so the service runs on it too.
-        var app = new CommunityLeadFactory(now: DateTimeOffset.UtcNow);
+        // The browser stamps times from the real clock (a receipt "now"), so the service runs on it too: a clock stopped
+        // at the test's start made a long run's receipts and analyses "in the future" once 15 minutes had passed.
+        var app = new CommunityLeadFactory(now: fixedClock ?? DateTimeOffset.UtcNow);
+        app.Clock.Running = fixedClock is null;
         configure?.Invoke(app);
+        // On a loaded machine (the whole suite beside chromium) a page can take longer than Playwright's 5 s default
+        // to show what a step waits for: every wait is on a condition, with room for a slow machine.
+        Assertions.SetDefaultExpectTimeout(30_000);
         app.UseKestrel(port);
         app.StartServer();
         var session = new BrowserApp(app, $"http://localhost:{port}");
@@ -66,7 +74,10 @@ public sealed partial class BrowserApp : IAsyncDisposable
             AcceptDownloads = true,
             HasTouch = touch,
             Locale = "en-US",
+            // Times typed into the pages' date fields are read in the browser's zone: UTC, as the tests type them.
+            TimezoneId = "UTC",
         });
+        Context.SetDefaultTimeout(60_000);
         Page = await Context.NewPageAsync();
         // A refusal the page expects (400, 412, 422) is logged by chromium as a failed load: not a page error.
         // Script errors, refused scripts or styles (CSP) and any 5xx still count.
@@ -95,6 +106,9 @@ public sealed partial class BrowserApp : IAsyncDisposable
 
     public async Task SignInAsync(string key)
     {
+        // The form is drawn once the page's words are loaded and <html lang> is set: read the language only then. Read
+        // at once, a slow page still said "en" (the file's own) and the key's Spanish label was never found.
+        await Page.Locator("#sign-in").WaitForAsync();
         await Page.GetByLabel(LabelOfKey(await Page.EvaluateAsync<string>("document.documentElement.lang"))).FillAsync(key);
         await Page.Locator("#sign-in button[type=submit]").ClickAsync();
     }

@@ -15,7 +15,8 @@ namespace CommunityLead.Tests.Browser;
 /// <summary>
 /// The coordinator's and the lab's day in a real browser, against the service on a socket: sign-in, sign-up,
 /// a stale edit, a kit and its label (scanned back from the PDF), receipt by "scanner", a refused and then an
-/// accepted lab CSV, the urgent call on Today, the letter, and the same pages again in Spanish.
+/// accepted lab CSV, the urgent call on Today, the kit's page (interpretation, the held letter's preview, the letter
+/// printed, its words, downloaded again and marked sent), and the same pages again in Spanish.
 /// </summary>
 // Pages, the API description and the README are the same whichever store is behind them: the PostgreSQL run
 // of .ci/run leaves these out (Store=Independent).
@@ -83,17 +84,25 @@ public class ConsoleWalkTests
         Assert.Equal(code, sheet.Decode(BarcodeFormat.CODE_128, stock.Left + stock.LabelWidth * 0.38, stock.Top, stock.LabelWidth * 0.62, stock.LabelHeight));
         Assert.Equal(code, sheet.Decode(BarcodeFormat.QR_CODE, stock.Left, stock.Top, stock.LabelWidth * 0.42, stock.LabelHeight));
 
-        // The household fills the bottles; receipt by "scanner": a typo first, then the code, each followed by Enter.
-        // The browser's service runs on the real clock and the kit was issued just now: the bottles are filled after it.
-        var filled = DateTimeOffset.UtcNow;
-        await PostAsync(coordinator, $"/api/kits/{code}/collection", new
-        {
-            samples = new object[]
-            {
-                new { bottle = "first-draw", volumeMl = 1000, collectedAt = filled.ToString("O"), waterLastUsedAt = filled.AddHours(-8).ToString("O"), tap = "kitchen" },
-                new { bottle = "flushed", volumeMl = 1000, collectedAt = filled.AddSeconds(20).ToString("O"), flushSeconds = 120 },
-            },
-        }, System.Net.HttpStatusCode.OK);
+        // The household's collection form, typed in on the kit's page. The kit was issued on the real clock just now:
+        // its bottles are dated from the issue the service recorded (to the second), never from the minute on the clock.
+        var issued = DateTime.Parse((await GetAsync(coordinator, $"/api/kits/{code}"))["issuedAt"]!.GetValue<string>(),
+            System.Globalization.CultureInfo.InvariantCulture, System.Globalization.DateTimeStyles.AdjustToUniversal | System.Globalization.DateTimeStyles.AssumeUniversal);
+        static string Typed(DateTime t) => t.ToString("yyyy-MM-dd'T'HH:mm:ss", System.Globalization.CultureInfo.InvariantCulture);
+        await page.GetByRole(AriaRole.Link, new() { Name = "Open its page" }).ClickAsync();
+        await page.GetByLabel("Water last used before the first draw").FillAsync(Typed(issued.AddSeconds(2).AddHours(-8)));
+        await page.Locator("#c-first-at").FillAsync(Typed(issued.AddSeconds(2)));
+        await page.GetByLabel("Tap", new() { Exact = true }).SelectOptionAsync("kitchen");
+        await page.GetByLabel("Tap ran first (seconds)").FillAsync("120");
+        await page.Locator("#c-flushed-at").FillAsync(Typed(issued.AddSeconds(30)));
+        await page.GetByRole(AriaRole.Button, new() { Name = "Record the bottles" }).ClickAsync();
+        await Expect(page.Locator("#status")).ToContainTextAsync("The bottles are recorded");
+        await Expect(page.Locator("#kit-state")).ToHaveTextAsync("Collected");
+        await Expect(page.Locator("#bottles")).ToContainTextAsync("water stood 8.0 h");
+        await browser.CheckAsync("04-kit-collected-en");
+
+        // Receipt by "scanner": a typo first, then the code, each followed by Enter.
+        await page.GotoAsync("/ui/kits/");
         var scan = page.GetByLabel("Kit code").First;
         await scan.FocusAsync();
         await scan.PressSequentiallyAsync(LabFixtures.Mistyped(code));
@@ -105,20 +114,26 @@ public class ConsoleWalkTests
         Assert.Equal("assertive", await page.Locator("#receipt-status").GetAttributeAsync("aria-live"));
         await browser.CheckAsync("04-kits-receipt-en");
 
-        // The lab, in a tab of its own: a bad CSV first (its problems beside its rows), then the corrected one.
+        // The lab, in a tab of its own: a bad CSV first (its problems beside its rows), then the corrected one. The
+        // analysis is dated a minute after the receipt and bottles the service recorded (typed to the minute, so never
+        // before them, and never more than a minute ahead of the service's clock).
+        var kit = await GetAsync(coordinator, $"/api/kits/{code}");
+        var latest = kit["samples"]!.AsArray().Select(s => s!["collectedAt"]!.GetValue<string>()).Append(kit["receivedAt"]!.GetValue<string>())
+            .Max(t => DateTimeOffset.Parse(t, System.Globalization.CultureInfo.InvariantCulture));
+        var analyzed = latest.UtcDateTime.AddMinutes(1).ToString("yyyy-MM-dd'T'HH:mm", System.Globalization.CultureInfo.InvariantCulture);
         await browser.NewContextAsync(1280, 900);
         page = browser.Page;
         await page.GotoAsync("/ui/lab/");
         await browser.SignInAsync(labKey);
-        await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"));
+        await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), analyzed);
         await Expect(page.Locator("#problem-table")).ToContainTextAsync("Row 2");
         await Expect(page.Locator("#problem-table pre").First).ToContainTextAsync("12O");
         await browser.CheckAsync("05-lab-refused-en");
-        await PostCsvAsync(page, "good.csv", LabCsv(code, firstDraw: "120", unit: "ug/L"));
+        await PostCsvAsync(page, "good.csv", LabCsv(code, firstDraw: "120", unit: "ug/L"), analyzed);
         await Expect(page.Locator("#status")).ToContainTextAsync("was received");
         await browser.CheckAsync("06-lab-accepted-en");
 
-        // Back as the coordinator: the urgent kit on Today, one card with every reason, name and phone; resolved in place.
+        // Back as the coordinator: the urgent kit on Today, one card with every reason, name and phone.
         await browser.NewContextAsync(1280, 900);
         page = browser.Page;
         await page.GotoAsync("/ui/today/");
@@ -129,27 +144,49 @@ public class ConsoleWalkTests
         await Expect(card).ToContainTextAsync("Urgent result");
         await Expect(card.GetByRole(AriaRole.Link, new() { Name = "Call +1 555 0114" })).ToBeVisibleAsync();
         await browser.CheckAsync("07-today-en");
+
+        // The kit's page from its card: what happened, the bottles, the result and what it means. While the urgent
+        // item is open its letter is only a preview.
+        await card.GetByRole(AriaRole.Link, new() { Name = code }).ClickAsync();
+        await Expect(page.Locator("#kit-state")).ToHaveTextAsync("Interpreted");
+        await Expect(page.Locator("#timeline")).ToContainTextAsync("Received");
+        await Expect(page.Locator("#bottles")).ToContainTextAsync("water stood 8.0 h");
+        await Expect(page.Locator("#results")).ToContainTextAsync("120");
+        await Expect(page.Locator("#meaning .tag").First).ToHaveTextAsync("Urgent");
+        var preview = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { Name = "Print the letter (PDF)" }).ClickAsync());
+        Assert.EndsWith("-preview.pdf", preview.SuggestedFilename);
+        await Expect(page.Locator("#letter-status")).ToContainTextAsync("This is a preview");
+        await Expect(page.Locator("#letters")).ToContainTextAsync("No letter printed yet.");
+        await browser.CheckAsync("08-kit-held-en");
+
+        // The call is made and noted on Today; the letter is then printed (recorded), its words shown, and marked sent.
+        await page.GotoAsync("/ui/today/");
         await card.GetByLabel("What was done").FillAsync("Called; bottled water and a filter arranged.");
         await card.GetByRole(AriaRole.Button, new() { Name = "Resolve" }).ClickAsync();
         await Expect(page.Locator("#status")).ToContainTextAsync($"Kit {code}");
         await Expect(card).ToHaveCountAsync(0);
-
-        // The released letter, downloaded and marked sent.
-        await page.GotoAsync($"/ui/kits/?code={code}");
-        var letter = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { Name = "Download the letter (PDF)" }).ClickAsync());
+        await page.GotoAsync($"/ui/kits/kit/?code={code}");
+        var letter = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { Name = "Print the letter (PDF)" }).ClickAsync());
         var letterFile = Path.Combine(BrowserApp.ScreenshotFolder, "letter.pdf");
         await letter.SaveAsAsync(letterFile);
         Assert.StartsWith("%PDF", Encoding.ASCII.GetString((await File.ReadAllBytesAsync(letterFile))[..4]));
-        await Expect(page.Locator("#lookup-status")).ToHaveTextAsync("The letter was downloaded.");
+        await Expect(page.Locator("#letter-status")).ToContainTextAsync("recorded");
+        await Expect(page.Locator("#letter-words section")).ToHaveCountAsync(4);
+        var again = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { NameRegex = new Regex("^PDF of letter [0-9]+$") }).ClickAsync());
+        Assert.StartsWith($"letter-{code}-", again.SuggestedFilename);
         await page.GetByRole(AriaRole.Button, new() { Name = "Mark the letter sent" }).ClickAsync();
-        await Expect(page.Locator("#kit")).ToContainTextAsync("Letter sent");
-        await browser.CheckAsync("08-kit-letter-sent-en");
+        await Expect(page.Locator("#kit-state")).ToHaveTextAsync("Letter sent");
+        await Expect(page.Locator("#timeline")).ToContainTextAsync("Letter marked sent");
+        await browser.CheckAsync("09-kit-letter-sent-en");
 
         // The same pages in Spanish.
         await page.GetByRole(AriaRole.Button, new() { Name = "Español" }).ClickAsync();
-        await Expect(page.Locator("h1")).ToHaveTextAsync("Kits");
+        await Expect(page.Locator("#kit-state")).ToHaveTextAsync("Carta enviada");
         Assert.Equal("es", await page.EvaluateAsync<string>("document.documentElement.lang"));
-        await browser.CheckAsync("09-kits-es");
+        await browser.CheckAsync("10-kit-es");
+        await page.GotoAsync("/ui/kits/");
+        await Expect(page.Locator("h1")).ToHaveTextAsync("Kits");
+        await browser.CheckAsync("10-kits-es");
         await page.GotoAsync("/ui/today/");
         await Expect(page.Locator("h1")).ToHaveTextAsync("Hoy");
         await browser.CheckAsync("10-today-es");
@@ -164,7 +201,7 @@ public class ConsoleWalkTests
 
         await page.GotoAsync("/ui/lab/");
         await browser.SignInAsync(labKey);
-        await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), batchId: "WALK-ES");
+        await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), analyzed, batchId: "WALK-ES");
         await Expect(page.Locator("#problem-table")).ToContainTextAsync("Fila 2");
         await browser.CheckAsync("12-lab-refused-es");
         await page.GotoAsync("/ui/");
@@ -179,11 +216,11 @@ public class ConsoleWalkTests
         calibration-check,,,lead,,ug/L,,,10,9.8
         """;
 
-    private static async Task PostCsvAsync(IPage page, string name, string csv, string batchId = "WALK-1")
+    private static async Task PostCsvAsync(IPage page, string name, string csv, string analyzedAt, string batchId = "WALK-1")
     {
         await page.GetByLabel(new Regex("CSV")).First.SetInputFilesAsync(new FilePayload { Name = name, MimeType = "text/csv", Buffer = Encoding.UTF8.GetBytes(csv) });
         await page.Locator("#batch-id").FillAsync(batchId);
-        await page.Locator("#analyzed-at").FillAsync(DateTime.UtcNow.AddMinutes(2).ToString("yyyy-MM-dd'T'HH:mm", System.Globalization.CultureInfo.InvariantCulture));
+        await page.Locator("#analyzed-at").FillAsync(analyzedAt);
         await page.Locator("#upload-form button[type=submit]").ClickAsync();
     }
 

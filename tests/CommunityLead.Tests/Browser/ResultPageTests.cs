@@ -53,5 +53,15 @@ public class ResultPageTests
         await page.GetByRole(AriaRole.Button, new() { Name = "Ver mi resultado" }).ClickAsync();
         await Assertions.Expect(page.Locator("#result")).ToBeVisibleAsync();
         await browser.CheckAsync("32-result-phone-shown-es");
+
+        // The narrowest common phone: the result table stacks, every cell (the 4th, "Comparado con", too) inside the
+        // screen, with its column's title beside it, and nothing to scroll sideways.
+        await page.SetViewportSizeAsync(360, 780);
+        Assert.True(await page.EvaluateAsync<bool>(
+            "[...document.querySelectorAll('#result td')].every(c => c.getBoundingClientRect().right <= window.innerWidth + 0.5)"));
+        Assert.True(await page.EvaluateAsync<bool>(
+            "[...document.querySelectorAll('#result .table-wrap')].every(w => w.scrollWidth <= w.clientWidth)"));
+        Assert.Equal("Comparado con", await page.Locator("#result td").Nth(3).GetAttributeAsync("data-label"));
+        await browser.CheckAsync("33-result-phone-360-es");
     }
 }

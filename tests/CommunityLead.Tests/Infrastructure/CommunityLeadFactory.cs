@@ -146,7 +146,14 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
 public sealed class TestClock(DateTimeOffset now) : TimeProvider
 {
     public DateTimeOffset Now { get; set; } = now;
-    public override DateTimeOffset GetUtcNow() => Now.ToUniversalTime();
+
+    /// <summary>
+    /// Follows the real clock instead of <see cref="Now"/>: for a browser, which stamps times from the computer's
+    /// clock (a receipt "now"), so "in the future" means the same to the page and to the service however long a run takes.
+    /// </summary>
+    public bool Running { get; set; }
+
+    public override DateTimeOffset GetUtcNow() => Running ? DateTimeOffset.UtcNow : Now.ToUniversalTime();
 }
 
 /// <summary>Keeps the messages of log entries at Error (or the level given) or above.</summary>

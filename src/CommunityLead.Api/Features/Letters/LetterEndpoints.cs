@@ -18,6 +18,7 @@ public static class LetterEndpoints
     // POST /api/kits/{code}/letter/sent        confirm it went out: kit → letter-sent              coordinator
     // GET  /api/kits/{code}/letters            every letter issued for the kit                     coordinator
     // GET  /api/letters/{id}                   a stored letter, rendered again byte for byte       coordinator
+    // GET  /api/letters/{id}/words             its words as the household's result page shows them   coordinator
     // POST /api/letters/batch[?combined=true]  ZIP of every kit ready for a letter (held kits       coordinator
     //                                          listed in the manifest, without a PDF)
     public static void MapLetters(this IEndpointRouteBuilder app)
@@ -40,6 +41,9 @@ public static class LetterEndpoints
             .ProducesProblem(StatusCodes.Status401Unauthorized).ProducesProblem(StatusCodes.Status403Forbidden);
         letters.MapGet("/{id:int}", LetterHandlers.Rerender).WithName("getLetter")
             .WithSummary("A stored letter, rendered again byte for byte").Produces(StatusCodes.Status200OK, contentType: "application/pdf")
+            .ProducesProblem(StatusCodes.Status404NotFound);
+        letters.MapGet("/{id:int}/words", LetterHandlers.Words).WithName("getLetterWords")
+            .WithSummary("A stored letter's words (facts, result table, sections), for a preview on the page")
             .ProducesProblem(StatusCodes.Status404NotFound);
         letters.MapPost("/batch", LetterBatch.Create).WithName("createLetterBatch")
             .WithSummary("A ZIP of every kit ready for a letter, with a manifest (held kits listed without a PDF)").Produces(StatusCodes.Status200OK, contentType: "application/zip")

@@ -116,6 +116,15 @@ public static class LetterHandlers
         return TypedResults.File(pdf, "application/pdf", FileName(letter));
     }
 
+    /// <summary>A stored letter's words, for a preview on the page; the same the household's result page shows.</summary>
+    public static async Task<Results<Ok<Features.Results.HouseholdResult>, ProblemHttpResult>> Words(
+        int id, CommunityLeadDb db, LetterIssuing issuing, CancellationToken ct)
+    {
+        var letter = await db.Letters.AsNoTracking().SingleOrDefaultAsync(l => l.Id == id, ct);
+        if (letter is null) return TypedResults.Problem(statusCode: 404, title: "No such letter.");
+        return TypedResults.Ok(Features.Results.ResultLookup.Words(letter, issuing.Read(letter)));
+    }
+
     private static ProblemHttpResult NotReady(string code, KitState state) =>
         TypedResults.Problem(statusCode: 409, title: "This kit has no interpretation for a letter yet.",
             detail: $"Kit {code} is {KebabEnum.Name(state)}; a letter is written once its results are in and interpreted.",

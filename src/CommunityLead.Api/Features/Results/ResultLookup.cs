@@ -24,10 +24,13 @@ public static class ResultLookup
     {
         var (letter, refusal) = await FindAsync(request, http, db, throttle, ct);
         if (letter is null) return refusal!;
-        var c = letters.Read(letter);
-        return TypedResults.Ok(new HouseholdResult(letter.KitCode, c.Language, c.Title, c.KitFacts, c.Results,
-            [c.Meaning, c.Steps, c.Cautions, c.WhoToCall], c.Closing, letter.IssuedAtUtc));
+        return TypedResults.Ok(Words(letter, letters.Read(letter)));
     }
+
+    /// <summary>The letter's words in the order the letter prints them; the coordinator's preview shows the same.</summary>
+    public static HouseholdResult Words(IssuedLetter letter, LetterContent c) =>
+        new(letter.KitCode, c.Language, c.Title, c.KitFacts, c.Results, [c.Meaning, c.Steps, c.Cautions, c.WhoToCall], c.Closing,
+            letter.IssuedAtUtc);
 
     public static async Task<Results<FileContentHttpResult, ProblemHttpResult>> Letter(
         ResultRequest request, HttpContext http, CommunityLeadDb db, LetterIssuing letters, ResultThrottle throttle, CancellationToken ct)

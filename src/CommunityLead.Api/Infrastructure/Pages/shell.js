@@ -7,7 +7,8 @@ import { el } from './dom.js';
 export { t } from './i18n.js';
 
 const NAV = {
-  coordinator: [['/ui/today/', 'nav.today'], ['/ui/households/', 'nav.households'], ['/ui/kits/', 'nav.kits']],
+  coordinator: [['/ui/today/', 'nav.today'], ['/ui/households/', 'nav.households'], ['/ui/kits/', 'nav.kits'],
+    ['/ui/letters/', 'nav.letters'], ['/ui/lab/batches/', 'nav.batches'], ['/ui/areas/', 'nav.areas']],
   lab: [['/ui/lab/', 'nav.lab']],
   health: [['/ui/health/', 'nav.health']],
   household: [['/ui/result/', 'nav.result']],

@@ -29,6 +29,23 @@ public class ResultLookupTests
     }
 
     [Fact]
+    public async Task LetterWords_TheCoordinatorsPreview_AreTheWordsTheHouseholdSees()
+    {
+        using var app = WithResultPage();
+        var coordinator = app.CreateClient(Roles.Coordinator);
+        var (code, secret, letterId) = await IssuedLetterAsync(app, coordinator);
+
+        var preview = await coordinator.GetAsync($"/api/letters/{letterId}/words");
+        Assert.Equal(HttpStatusCode.OK, preview.StatusCode);
+        var household = await app.CreateClient().PostAsJsonAsync("/api/results", new { code, secret });
+        Assert.Equal(JsonNode.Parse(await household.Content.ReadAsStringAsync())!.ToJsonString(),
+            JsonNode.Parse(await preview.Content.ReadAsStringAsync())!.ToJsonString());
+
+        Assert.Equal(HttpStatusCode.NotFound, (await coordinator.GetAsync($"/api/letters/{letterId + 1000}/words")).StatusCode);
+        Assert.Equal(HttpStatusCode.Forbidden, (await app.CreateClient(Roles.Lab).GetAsync($"/api/letters/{letterId}/words")).StatusCode);
+    }
+
+    [Fact]
     public async Task Result_CodeAndSecretFromTheLetter_ShowsItsWordsAndLetter_SecretStoredOnlyHashed()
     {
         using var app = WithResultPage();

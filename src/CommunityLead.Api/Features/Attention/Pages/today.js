@@ -20,7 +20,7 @@ function card(kit, index) {
   const article = el('article', { class: `panel kit-card ${kit.mostUrgent}`, 'aria-labelledby': `${id}-title` },
     el('header', {},
       el('h2', { id: `${id}-title` }, kit.householdName),
-      el('span', {}, t('today.kit'), ' ', el('a', { class: 'code', href: `/ui/kits/?code=${encodeURIComponent(kit.kitCode)}` }, kit.kitCode)),
+      el('span', {}, t('today.kit'), ' ', el('a', { class: 'code', href: `/ui/kits/kit/?code=${encodeURIComponent(kit.kitCode)}` }, kit.kitCode)),
       kit.phone
         ? el('a', { href: `tel:${kit.phone.replace(/[^0-9+]/g, '')}` }, t('today.call', { phone: kit.phone }))
         : el('span', {}, t('today.noPhone')),

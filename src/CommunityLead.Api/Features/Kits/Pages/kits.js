@@ -1,10 +1,10 @@
 // Kits: receipt by typing or scanning (a handheld scanner types the code and Enter, many in a row, each one
 // confirmed in an assertive live region), issuing a kit and printing its label, label sheets, one kit's state and
-// letter, and the work queue by state.
+// letter, and the work queue by state. One kit's details are on its own page (kit/).
 import { startPage, report, t, problemText } from '/ui/shell.js';
 import { api, ApiError, download } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
-import { formatDate, formatNumber } from '/ui/i18n.js';
+import { formatDate } from '/ui/i18n.js';
 import { nowWithOffset } from '/ui/times.js';
 
 const STATES = ['issued', 'collected', 'received', 'analyzed', 'interpreted', 'letter-sent', 'closed', 'cancelled', 'lost', 'rejected'];
@@ -53,6 +53,7 @@ async function issue(event) {
   try {
     const kit = await api('/api/kits', { method: 'POST', body: { householdId: household.id, kind: byId('issue-kind').value } });
     say(status, t('kits.issued', { code: kit.code, name: household.name }));
+    status.append(' ', el('a', { href: `kit/?code=${encodeURIComponent(kit.code)}` }, t('kits.openKit')));
     const label = byId('issued-label');
     label.hidden = false;
     label.onclick = () => download(`/api/kits/labels?stock=${byId('labels-stock').value}&codes=${encodeURIComponent(kit.code)}`, `kit-label-${kit.code}.pdf`)
@@ -75,45 +76,9 @@ async function labels(event) {
   }
 }
 
-function kitView(kit) {
-  const code = kit.code;
-  const status = byId('lookup-status');
-  const hasLetter = ['interpreted', 'letter-sent', 'closed'].includes(kit.state);
-  return el('div', {},
-    el('p', {}, el('span', { class: 'code' }, code), ' · ', t(`kind.${kit.kind}`), ' · ', el('strong', {}, t(`state.${kit.state}`))),
-    kit.flags.length ? el('ul', { class: 'reasons' }, kit.flags.map(f => el('li', {}, el('span', { class: `tag ${f.severity}` }, f.severity), ' ', f.message))) : null,
-    kit.samples.length ? el('ul', { class: 'reasons' }, kit.samples.map(s => el('li', {},
-      t(`bottle.${s.bottle}`), s.position ? ` ${s.position}` : '', ' · ', formatDate(s.collectedAt),
-      s.standingMinutes != null ? ` · ${t('kits.standing', { hours: formatNumber(s.standingMinutes / 60, 1) })}` : ''))) : null,
-    hasLetter ? el('div', {},
-      el('button', { type: 'button', class: 'quiet', onclick: async () => {
-        try {
-          const response = await download(`/api/kits/${code}/letter`, `letter-${code}.pdf`);
-          say(status, response.headers.get('X-Letter-Released') === 'false' ? t('kits.letterPreview') : t('kits.letterReady'),
-            response.headers.get('X-Letter-Released') === 'false' ? 'warn' : 'ok');
-        } catch (e) { report(e, status); }
-      } }, t('kits.downloadLetter')), ' ',
-      kit.state === 'interpreted' ? el('button', { type: 'button', onclick: async () => {
-        try {
-          await api(`/api/kits/${code}/letter/sent`, { method: 'POST', body: {} });
-          say(status, t('kits.letterSent', { code }));
-          await lookup(code);
-        } catch (e) { report(e, status); }
-      } }, t('kits.markSent')) : null) : null,
-    kit.history ? el('details', {}, el('summary', {}, t('kits.history')),
-      el('ol', {}, kit.history.map(h => el('li', {}, formatDate(h.at), ' · ', h.action, h.to ? ` → ${h.to}` : '', h.reason ? ` (${h.reason})` : '')))) : null);
-}
-
-async function lookup(typed) {
-  const status = byId('lookup-status');
-  try {
-    const kit = await api(`/api/kits/${encodeURIComponent(typed.trim())}`);
-    byId('kit').replaceChildren(kitView(kit));
-  } catch (error) {
-    if (error instanceof ApiError && error.status === 401) return report(error, status);
-    byId('kit').replaceChildren();
-    say(status, codeProblem(error, typed), 'error');
-  }
+/** One kit opens on its own page (kit/), where its timeline, results and letter are. */
+function openKit(typed) {
+  location.assign(`kit/?code=${encodeURIComponent(typed.trim())}`);
 }
 
 async function queue(event) {
@@ -126,7 +91,7 @@ async function queue(event) {
       el('caption', {}, t(`state.${byId('queue-state').value}`)),
       el('thead', {}, el('tr', {}, ['kits.code', 'kits.kind', 'households.area', 'kits.updated', 'kits.flags'].map(k => el('th', { scope: 'col' }, t(k))))),
       el('tbody', {}, page.items.map(k => el('tr', {},
-        el('td', {}, el('a', { class: 'code', href: `?code=${encodeURIComponent(k.code)}` }, k.code)),
+        el('td', {}, el('a', { class: 'code', href: `kit/?code=${encodeURIComponent(k.code)}` }, k.code)),
         el('td', {}, t(`kind.${k.kind}`)), el('td', {}, k.areaCode), el('td', {}, formatDate(k.updatedAt)),
         el('td', { class: 'num' }, k.flagCount))))) : '');
   } catch (error) {
@@ -140,12 +105,13 @@ startPage({
     byId('receipt-form').addEventListener('submit', receive);
     byId('issue-form').addEventListener('submit', issue);
     byId('labels-form').addEventListener('submit', labels);
-    byId('lookup-form').addEventListener('submit', e => { e.preventDefault(); lookup(byId('lookup-code').value); });
+    byId('lookup-form').addEventListener('submit', e => { e.preventDefault(); openKit(byId('lookup-code').value); });
     byId('queue-form').addEventListener('submit', queue);
     byId('queue-state').replaceChildren(...STATES.map(s => el('option', { value: s }, t(`state.${s}`))));
     const query = new URLSearchParams(location.search);
     if (query.get('household')) await chooseHousehold(query.get('household'));
-    if (query.get('code')) { byId('lookup-code').value = query.get('code'); await lookup(query.get('code')); }
+    // An older link to one kit (?code=) opens its page.
+    if (query.get('code')) { location.replace(`kit/?code=${encodeURIComponent(query.get('code'))}`); return; }
     byId('receipt-code').focus();
   },
 });

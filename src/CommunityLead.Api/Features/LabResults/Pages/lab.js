@@ -4,7 +4,7 @@ import { startPage, report, t } from '/ui/shell.js';
 import { api, ApiError } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
 import { withOffset } from '/ui/times.js';
-import { formatNumber } from '/ui/i18n.js';
+import { qcTable } from './qc.js';
 
 function isCsv(file) { return /\.csv$/i.test(file.name) || file.type === 'text/csv'; }
 
@@ -45,14 +45,7 @@ function showOutcome(batch) {
   const checks = batch.qc?.checks || batch.qcChecks || [];
   byId('outcome-body').replaceChildren(
     el('p', {}, t('lab.outcome', { id: batch.batchId, version: batch.version, status: batch.status ?? batch.verdict ?? '' })),
-    checks.length ? el('div', { class: 'table-wrap' }, el('table', {},
-      el('caption', {}, t('lab.qcCaption')),
-      el('thead', {}, el('tr', {}, ['lab.qcCheck', 'lab.qcValue', 'lab.qcWindow', 'lab.qcPassed'].map(k => el('th', { scope: 'col' }, t(k))))),
-      el('tbody', {}, checks.map(c => el('tr', {},
-        el('td', {}, `${c.type ?? ''} ${c.analyte ?? ''} ${c.figure ?? ''}`.trim()),
-        el('td', { class: 'num' }, typeof c.value === 'number' ? formatNumber(c.value, 2) : ''),
-        el('td', {}, c.low != null || c.high != null ? `${c.low ?? '—'} – ${c.high ?? '—'}` : ''),
-        el('td', {}, c.passed ? t('lab.yes') : t('lab.no'))))))) : null);
+    checks.length ? qcTable(checks) : null);
   byId('outcome').hidden = false;
   byId('outcome-title').focus();
 }

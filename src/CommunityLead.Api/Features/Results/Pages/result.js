@@ -3,6 +3,7 @@
 import { startPage, report, t } from '/ui/shell.js';
 import { api, ApiError, download } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
+import { letterWords } from './words.js';
 
 function body() {
   return { code: byId('code').value.trim(), secret: byId('secret').value.trim() };
@@ -12,16 +13,7 @@ function show(result) {
   const article = byId('result');
   article.lang = result.language;
   article.replaceChildren(
-    el('h2', { id: 'result-title', tabindex: '-1' }, result.title),
-    el('dl', {}, result.facts.map(f => [el('dt', {}, f.label), el('dd', {}, f.value)])),
-    result.results ? el('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-labelledby': 'result-title' }, el('table', {},
-      el('thead', {}, el('tr', {}, result.results.headers.map(h => el('th', { scope: 'col' }, h)))),
-      el('tbody', {}, result.results.rows.map(r => el('tr', {}, r.map(c => el('td', {}, c))))))) : null,
-    result.results?.note ? el('p', { class: 'hint' }, result.results.note) : null,
-    ...result.sections.map(s => el('section', {},
-      el('h3', {}, s.heading),
-      s.numbered ? el('ol', {}, s.paragraphs.map(p => el('li', {}, p))) : s.paragraphs.map(p => el('p', {}, p)))),
-    el('p', {}, result.closing),
+    ...letterWords(result, { titleId: 'result-title' }),
     el('button', { type: 'button', id: 'letter', onclick: async () => {
       try {
         await download('/api/results/letter', `letter-${result.kitCode}.pdf`, { method: 'POST', body: body() });
