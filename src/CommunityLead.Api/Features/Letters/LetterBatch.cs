@@ -34,7 +34,8 @@ public static class LetterBatch
             var manifest = new StringBuilder(Header);
             foreach (var letter in letters)
             {
-                await using (var entry = zip.CreateEntry($"letters/{LetterHandlers.FileName(letter.Record)}", CompressionLevel.Fastest).Open())
+                // Stored as they are: a letter's streams are compressed already, deflating them again gains nothing.
+                await using (var entry = zip.CreateEntry($"letters/{LetterHandlers.FileName(letter.Record)}", CompressionLevel.NoCompression).Open())
                     await entry.WriteAsync(letter.Pdf, ct);
                 var r = letter.Record;
                 manifest.Append($"{r.KitCode},{r.Id},{KebabEnum.Name(r.Kind)},{KebabEnum.Name(r.Language)},{r.Pages},{r.Sha256},issued,\n");
@@ -44,7 +45,7 @@ public static class LetterBatch
             await using (var entry = zip.CreateEntry("manifest.csv").Open())
                 await entry.WriteAsync(Encoding.UTF8.GetBytes(manifest.ToString()), ct);
             if (combined && letters.Count > 0)
-                await using (var entry = zip.CreateEntry("all-letters.pdf", CompressionLevel.Fastest).Open())
+                await using (var entry = zip.CreateEntry("all-letters.pdf", CompressionLevel.NoCompression).Open())
                     await entry.WriteAsync(LetterPdf.Combine(letters.Select(l => l.Pdf)), ct);
         }
         return TypedResults.File(buffer.ToArray(), "application/zip", $"letters-{clock.GetUtcNow():yyyy-MM-dd}.zip");

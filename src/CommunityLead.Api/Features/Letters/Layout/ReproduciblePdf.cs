@@ -26,9 +26,10 @@ internal static partial class ReproduciblePdf
         document.Internals.Catalog.Language = content.Language == Rules.Households.LetterLanguage.Es ? "es" : "en";
         document.Internals.FirstDocumentID = document.Internals.SecondDocumentID = new string('\0', 16);
 
-        using var stream = new MemoryStream();
+        // Saved plain, a letter is about 130 KB (its fonts before CompactPdf trims them): room for it from the start.
+        using var stream = new MemoryStream(192 * 1024);
         document.Save(stream);
-        var bytes = stream.ToArray();
+        var bytes = CompactPdf.Compress(stream.ToArray());
         Normalise(bytes);
         return bytes;
     }

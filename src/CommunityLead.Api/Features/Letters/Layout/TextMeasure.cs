@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using PdfSharp.Drawing;
 
 namespace CommunityLead.Api.Features.Letters.Layout;
@@ -5,7 +6,22 @@ namespace CommunityLead.Api.Features.Letters.Layout;
 /// <summary>Measures and wraps text with PDFsharp's own metrics, so what is measured is what is drawn.</summary>
 internal sealed class TextMeasure(XGraphics measure)
 {
-    public double Width(string text, XFont font) => text.Length == 0 ? 0 : measure.MeasureString(text, font).Width;
+    // A mailing measures the same phrases in the same fonts thousands of times (twice a letter when the tight spacing
+    // is tried): widths are remembered for the process, keyed by what decides them. Bounded, since names and
+    // addresses differ from letter to letter; past the bound a width is simply measured again.
+    private const int RememberedWidths = 100_000;
+    private static readonly ConcurrentDictionary<(string Text, double Size, XFontStyleEx Style), double> Widths =
+        new(concurrencyLevel: 4 * Environment.ProcessorCount, capacity: 8_192);
+
+    public double Width(string text, XFont font)
+    {
+        if (text.Length == 0) return 0;
+        var key = (text, font.Size, font.Style);
+        if (Widths.TryGetValue(key, out var width)) return width;
+        width = measure.MeasureString(text, font).Width;
+        if (Widths.Count < RememberedWidths) Widths.TryAdd(key, width);
+        return width;
+    }
 
     /// <summary>
     /// Greedy word wrap at spaces. A number stays on the line of the word after it ("10 µg/L") while the two fit
