@@ -11,7 +11,8 @@ namespace CommunityLead.Benchmarks.Http;
 /// The README's performance table, measured end to end: the service's Release build in its own process on Kestrel,
 /// traffic over 127.0.0.1, each figure beside a baseline measured in the same run on the same machine.
 /// <c>dotnet run -c Release --project tests/CommunityLead.Benchmarks -- table [--quick]</c>; --quick shortens the
-/// load runs to 10 s and the summary store to 200,000 kits.
+/// load runs to 10 s and the summary store to 200,000 kits; <c>--only reads,ingest</c> measures only the parts named
+/// (reads: start-up and kit reads; ingest: the lab batches; letters; summary), all of them without it.
 /// </summary>
 internal sealed class PerformanceTable(bool quick)
 {
@@ -22,12 +23,20 @@ internal sealed class PerformanceTable(bool quick)
     public static async Task<int> RunAsync(string[] args)
     {
         var table = new PerformanceTable(args.Contains("--quick"));
+        var only = args.SkipWhile(a => a != "--only").Skip(1).FirstOrDefault()?.Split(',') ?? [];
+        string[] parts = ["reads", "ingest", "letters", "summary"];
+        if (only.Except(parts).FirstOrDefault() is { } unknown)
+        {
+            Console.Error.WriteLine($"--only: unknown part '{unknown}'; use {string.Join(", ", parts)}.");
+            return 2;
+        }
+        bool Wanted(string part) => only.Length == 0 || only.Contains(part);
         try
         {
-            await table.StartUpAndKitReadsAsync();
-            await table.IngestAsync();
-            await table.LettersAsync();
-            await table.SummaryAsync();
+            if (Wanted("reads")) await table.StartUpAndKitReadsAsync();
+            if (Wanted("ingest")) await table.IngestAsync();
+            if (Wanted("letters")) await table.LettersAsync();
+            if (Wanted("summary")) await table.SummaryAsync();
         }
         finally
         {
