@@ -12,9 +12,9 @@ namespace CommunityLead.Tests.Features.LabResults;
 /// <summary>
 /// Interrupts a lab post or a release at the moment its results have been written: the client goes away (the
 /// request is aborted, so its token is cancelled, as when a lab's client times out), or the process dies (the next
-/// command throws, as a killed process never reaches what comes after). It acts on the database commands themselves
-/// (the results are inserted in bulk, not through SaveChanges), not on a timer, so the interruption always lands at
-/// the same point: right after the first statement that inserts results, or that marks a held batch released.
+/// command throws, as a killed process never reaches what comes after). It acts on the database commands EF Core runs,
+/// not on a timer, so the interruption always lands at the same point: right after the statement that inserts the
+/// batch's row (its results follow it in bulk, BulkInsert, on the same transaction), or that marks a held batch released.
 /// </summary>
 internal sealed class InterruptAfterResultsSaved : DbCommandInterceptor
 {
@@ -99,7 +99,7 @@ internal sealed class InterruptAfterResultsSaved : DbCommandInterceptor
 
     /// <summary>A lab post (new results) or a release (a held batch put into effect).</summary>
     private static bool WritesResults(DbCommand command) =>
-        command.CommandText.Contains("INSERT INTO \"LabResults\"", StringComparison.Ordinal)
+        command.CommandText.Contains("INSERT INTO \"LabBatches\"", StringComparison.Ordinal)
         || (command.CommandText.Contains("UPDATE \"LabBatches\"", StringComparison.Ordinal)
             && command.CommandText.Contains("\"ReleasedAtUtc\"", StringComparison.Ordinal));
 }
