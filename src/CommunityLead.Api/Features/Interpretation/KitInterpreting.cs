@@ -48,9 +48,18 @@ public static class KitInterpreting
         var kits = await db.Kits.AsNoTracking().Where(k => wanted.Contains(k.Id) && Interpretable.Contains(k.State)).ToListAsync(CancellationToken.None);
         if (foundAt is not null && kits.FirstOrDefault(k => foundAt.GetValueOrDefault(k.Id) != k.Version) is { } moved)
             throw new DbUpdateConcurrencyException($"Kit {moved.Code} was changed since it was found.");
-        var facts = await KitFactsLoader.LoadAsync(db, [.. kits.Select(k => k.Id)], CancellationToken.None);
-
         var outcomes = new Dictionary<int, KitOutcome>();
+        // A chunk at a time, so a 50,000-kit batch never holds every kit's facts and stored outcome at once.
+        foreach (var chunk in kits.Chunk(ChunkSize)) await InterpretChunkAsync(db, catalog, chunk, actor, nowUtc, json, outcomes);
+        return outcomes;
+    }
+
+    private const int ChunkSize = 2_000;
+
+    private static async Task InterpretChunkAsync(CommunityLeadDb db, ProfileCatalog catalog, IReadOnlyList<Kit> kits, Actor actor,
+        DateTime nowUtc, JsonSerializerOptions json, Dictionary<int, KitOutcome> outcomes)
+    {
+        var facts = await KitFactsLoader.LoadAsync(db, [.. kits.Select(k => k.Id)], CancellationToken.None);
         var stored = new List<KitInterpretation>();
         var raised = new List<AttentionItem>();
         var writes = new KitWrites();
@@ -82,7 +91,6 @@ public static class KitInterpreting
             writes.Attention.AddRange(raised);
         }
         await writes.FlushAsync(db);
-        return outcomes;
     }
 
     /// <summary>
