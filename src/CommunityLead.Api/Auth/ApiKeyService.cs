@@ -10,7 +10,7 @@ namespace CommunityLead.Api.Auth;
 /// Keys look like "clk_&lt;id&gt;_&lt;secret&gt;". The id finds the row; the secret is compared as a salted
 /// SHA-256 hash in constant time. A 256-bit random secret needs no slow password hash: it can't be guessed.
 /// </summary>
-public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock)
+public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock, VerifiedKeys recent)
 {
     private const string Prefix = "clk";
 
@@ -61,18 +61,22 @@ public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock)
             : null;
     }
 
+    /// <summary>The key's label and role, from <see cref="VerifiedKeys"/> when it was verified a few seconds ago.</summary>
     public async Task<Verified?> VerifyAsync(string presented, CancellationToken ct = default)
     {
+        if (recent.Find(presented) is { } known) return known;
         var parts = presented.Split('_');
         if (parts.Length != 3 || parts[0] != Prefix) return null;
+        var keyId = parts[1];
         var row = await db.ApiKeys.AsNoTracking()
-            .Where(k => k.KeyId == parts[1] && k.RevokedAtUtc == null)
+            .Where(k => k.KeyId == keyId && k.RevokedAtUtc == null)
             .Select(k => new { k.Label, k.Role, k.Salt, k.SecretHash })
             .SingleOrDefaultAsync(ct);
         if (row is null) return null;
-        return CryptographicOperations.FixedTimeEquals(Hash(row.Salt, parts[2]), row.SecretHash)
-            ? new Verified(row.Label, row.Role)
-            : null;
+        if (!CryptographicOperations.FixedTimeEquals(Hash(row.Salt, parts[2]), row.SecretHash)) return null;
+        var verified = new Verified(row.Label, row.Role);
+        recent.Remember(presented, verified);
+        return verified;
     }
 
     public async Task RevokeAsync(string label, CancellationToken ct = default)
@@ -87,6 +91,7 @@ public sealed class ApiKeyService(CommunityLeadDb db, TimeProvider clock)
             Subject = "key", SubjectKey = label, Action = "revoke-key",
         });
         await db.SaveChangesAsync(ct);
+        recent.Forget();
     }
 
     private static byte[] Hash(byte[] salt, string secret) => SHA256.HashData([.. salt, .. Encoding.UTF8.GetBytes(secret)]);

@@ -44,6 +44,7 @@ public static class ServiceSetup
         services.AddHttpContextAccessor();
 
         services.AddScoped<ApiKeyService>();
+        services.AddSingleton<VerifiedKeys>();
         services.AddSingleton<SignInThrottle>();
         services.AddCommunityLeadRateLimits();
         services.AddCommunityLeadForwarding();

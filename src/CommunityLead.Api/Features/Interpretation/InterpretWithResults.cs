@@ -19,22 +19,22 @@ namespace CommunityLead.Api.Features.Interpretation;
 public sealed class InterpretWithResults(CommunityLeadDb db, ProfileCatalog catalog, IOptions<JsonOptions> json)
 {
     /// <summary>
-    /// Saves everything the context tracks, then interprets <paramref name="completedKits"/>. A lost race throws
-    /// the <see cref="DbUpdateException"/> of the failed save, with nothing written.
+    /// Saves everything the context tracks, then what <paramref name="bulk"/> writes without the change tracker (a
+    /// batch's rows: <see cref="BulkInsert"/>, <see cref="KitWrites"/>), then interprets <paramref name="completedKits"/>.
+    /// A lost race throws the <see cref="DbUpdateException"/> of the failed write, with nothing written.
     /// </summary>
-    public async Task SaveAsync(IReadOnlyList<int> completedKits, Actor actor, DateTime nowUtc)
+    public async Task SaveAsync(IReadOnlyList<int> completedKits, Actor actor, DateTime nowUtc, Func<CommunityLeadDb, Task>? bulk = null)
     {
         var uncancellable = CancellationToken.None;
         await using var transaction = await db.Database.BeginTransactionAsync(uncancellable);
         await db.SaveChangesAsync(uncancellable);
+        if (bulk is not null) await bulk(db);
         IReadOnlyDictionary<int, KitOutcome> outcomes = new Dictionary<int, KitOutcome>();
         if (completedKits.Count > 0)
         {
-            // The results just written are read back inside this transaction. Clearing first spares the second
-            // save from checking every row of a 10,000-row batch for changes again.
+            // What the context tracked is saved; the interpretation reads what it needs afresh, inside this transaction.
             db.ChangeTracker.Clear();
             outcomes = await KitInterpreting.InterpretAsync(db, catalog, completedKits, actor, nowUtc, json.Value.SerializerOptions, uncancellable);
-            await db.SaveChangesAsync(uncancellable);
         }
         await transaction.CommitAsync(uncancellable);
         ServiceMetrics.Interpreted(outcomes.Values.Select(o => o.Band));

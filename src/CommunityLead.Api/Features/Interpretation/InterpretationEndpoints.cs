@@ -59,8 +59,15 @@ public static class InterpretationEndpoints
         if (!KitLifecycle.TryMove(kit.State, KitAction.Interpret, out _))
             return Problems.IllegalMove(kit.Code, kit.State, KitAction.Interpret);
         var now = clock.GetUtcNow().UtcDateTime;
-        var outcome = (await KitInterpreting.InterpretAsync(db, catalog, [kit.Id], Actor.From(http.User), now, json.Value.SerializerOptions, ct))[kit.Id];
-        if (await KitTransitions.SaveAsync(db, kit.Code, ct) is { } conflict) return conflict;
+        KitOutcome outcome;
+        try
+        {
+            outcome = (await KitInterpreting.InterpretAndCommitAsync(db, catalog, new Dictionary<int, int> { [kit.Id] = kit.Version }, Actor.From(http.User), now, json.Value.SerializerOptions, ct))[kit.Id];
+        }
+        catch (DbUpdateConcurrencyException)
+        {
+            return Problems.ChangedMeanwhile(kit.Code);
+        }
         ServiceMetrics.Interpreted([outcome.Band]);
         var profile = catalog.For(kit.Kind);
         return TypedResults.Ok(Response(kit.Code, outcome, new ProfileRef(profile.Id, profile.Version), now, provisional: false));

@@ -57,15 +57,15 @@ public sealed class InterpretationRepair(CommunityLeadDb db, ProfileCatalog cata
         db.ChangeTracker.Clear();
         var found = due.ToDictionary(d => d.Id);
         var ids = found.Keys.ToList();
-        // Tracked here, so the interpreting below uses (and the save checks) exactly the versions compared now.
-        var kits = await db.Kits.Where(k => ids.Contains(k.Id)).ToListAsync(ct);
-        var unchanged = kits.Where(k => k.Version == found[k.Id].Version).Select(k => k.Id).ToList();
+        // The interpreting below raises each kit's version from the one it reads and fails whole if another instance moved one meanwhile.
+        var kits = await db.Kits.AsNoTracking().Where(k => ids.Contains(k.Id)).ToListAsync(ct);
+        var unchanged = kits.Where(k => k.Version == found[k.Id].Version).ToDictionary(k => k.Id, k => k.Version);
         if (unchanged.Count == 0) return [];
         var now = clock.GetUtcNow().UtcDateTime;
-        var outcomes = await KitInterpreting.InterpretAsync(db, catalog, unchanged, Actor, now, json.Value.SerializerOptions, ct);
+        IReadOnlyDictionary<int, CommunityLead.Rules.Interpretation.Interpretation> outcomes;
         try
         {
-            await db.SaveChangesAsync(ct);
+            outcomes = await KitInterpreting.InterpretAndCommitAsync(db, catalog, unchanged, Actor, now, json.Value.SerializerOptions, ct);
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {

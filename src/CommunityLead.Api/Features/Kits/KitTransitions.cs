@@ -15,6 +15,11 @@ namespace CommunityLead.Api.Features.Kits;
 public static class KitTransitions
 {
     public static ProblemHttpResult? Apply(CommunityLeadDb db, Kit kit, KitAction action, Actor actor, DateTime nowUtc,
+        string? reason = null, string? detail = null) =>
+        Apply(kit, action, actor, nowUtc, entry => db.AuditTrail.Add(entry), reason, detail);
+
+    /// <summary>The same move for a kit the context does not track (bulk writes: <see cref="KitWrites"/>); the audit entry goes to <paramref name="record"/>.</summary>
+    public static ProblemHttpResult? Apply(Kit kit, KitAction action, Actor actor, DateTime nowUtc, Action<AuditEntry> record,
         string? reason = null, string? detail = null)
     {
         if (!KitLifecycle.TryMove(kit.State, action, out var next))
@@ -24,7 +29,7 @@ public static class KitTransitions
         kit.UpdatedAtUtc = nowUtc;
         kit.Version++;
         if (reason is not null && KitLifecycle.RequiresReason(action)) kit.StateReason = reason;
-        db.AuditTrail.Add(Audit.Kit(actor, nowUtc, kit.Code, KebabEnum.Name(action),
+        record(Audit.Kit(actor, nowUtc, kit.Code, KebabEnum.Name(action),
             KebabEnum.Name(from), KebabEnum.Name(next), reason, detail));
         return null;
     }

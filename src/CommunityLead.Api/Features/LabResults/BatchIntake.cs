@@ -121,15 +121,25 @@ public static class BatchIntake
 
         var now = intake.Clock.GetUtcNow().UtcDateTime;
         var entity = BatchRecords.NewBatch(batch, (latest?.Version ?? 0) + 1, hash, format, options.Qc, actor, now, intake.JsonOptions);
+        // The batch's own row goes through the context; its result and QC rows are inserted in bulk once it has its key.
+        var (results, qc) = (entity.Results, entity.Qc);
+        (entity.Results, entity.Qc) = ([], []);
         db.LabBatches.Add(entity);
         db.AuditTrail.Add(Audit.Batch(actor, now, entity.BatchId, batch.Correction ? "post-correction" : "post",
             KebabEnum.Name(entity.Status), entity.CorrectionReason,
             $"version {entity.Version}, {entity.ResultCount} results, {format}, QC {(entity.Status == BatchStatus.Held ? "failed" : "passed")}"));
-        var effects = entity.InEffect ? await BatchEffects.ApplyAsync(db, entity, entity.Results, actor, now, ct) : null;
+        var effects = entity.InEffect ? await BatchEffects.ApplyAsync(db, entity, results, actor, now, ct) : null;
         if (effects?.Conflict is { } illegal) return illegal;
         try
         {
-            await intake.Interpreting.SaveAsync(effects?.Analyzed ?? [], actor, now);
+            await intake.Interpreting.SaveAsync(effects?.Analyzed ?? [], actor, now, async store =>
+            {
+                foreach (var row in results) row.LabBatchId = entity.Id;
+                foreach (var row in qc) row.LabBatchId = entity.Id;
+                await BulkInsert.InsertAsync(store, qc);
+                await BulkInsert.InsertAsync(store, results);
+                if (effects is not null) await effects.WriteAsync(store, now);
+            });
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {

@@ -39,13 +39,13 @@ public static class BatchReleasing
         batch.ReleaseReason = request.Reason!.Trim();
         db.AuditTrail.Add(Audit.Batch(actor, now, batchId, "release", KebabEnum.Name(BatchStatus.Released), batch.ReleaseReason,
             $"version {batch.Version}"));
-        var results = await db.LabResults.Where(r => r.LabBatchId == batch.Id).ToListAsync(ct);
+        var results = await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == batch.Id).ToListAsync(ct);
         var effects = await BatchEffects.ApplyAsync(db, batch, results, actor, now, ct);
         if (effects.Conflict is { } illegal) return illegal;
         try
         {
             // The release, its effects and the interpretation they call for: one transaction, not cancellable.
-            await interpreting.SaveAsync(effects.Analyzed, actor, now);
+            await interpreting.SaveAsync(effects.Analyzed, actor, now, store => effects.WriteAsync(store, now));
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {

@@ -20,14 +20,14 @@ namespace CommunityLead.Api.Features.LabResults;
 public static class WaitingResults
 {
     /// <summary>Raises the kit's item once (BatchEffects, when a batch comes into effect); none while one is open.</summary>
-    public static async Task RaiseAsync(CommunityLeadDb db, Kit kit, LabBatch batch, IReadOnlyList<LabResult> results, DateTime nowUtc,
+    public static async Task RaiseAsync(CommunityLeadDb db, KitWrites writes, Kit kit, LabBatch batch, IReadOnlyList<LabResult> results, DateTime nowUtc,
         CancellationToken ct)
     {
         if (await db.Attention.AnyAsync(a => a.KitId == kit.Id && a.ResolvedAtUtc == null && a.Reason == AttentionFlag.AwaitingCollection, ct))
             return;
         var highest = results.Where(r => r.KitId == kit.Id && r.Analyte == Analyte.Lead).MaxBy(r => r.Value);
         var lead = highest is null ? "" : $" Highest lead: {highest.Value.ToString("0.###", CultureInfo.InvariantCulture)} {highest.Unit}.";
-        db.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, AttentionFlag.AwaitingCollection,
+        writes.Attention.Add(AttentionItem.Raise(kit.Id, kit.Code, AttentionFlag.AwaitingCollection,
             $"Results for kit {kit.Code} came in (batch {batch.BatchId}), but its collection form was never recorded. " +
             $"Record the bottles and the results are interpreted at once.{lead}", nowUtc));
     }

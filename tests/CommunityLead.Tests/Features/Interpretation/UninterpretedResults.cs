@@ -6,6 +6,7 @@ using CommunityLead.Api.Features.LabResults;
 using CommunityLead.Api.Infrastructure;
 using CommunityLead.Tests.Infrastructure;
 using Microsoft.AspNetCore.Http.Json;
+using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Options;
 
@@ -41,6 +42,9 @@ internal static class UninterpretedResults
             $"version 1, {entity.ResultCount} results, {parsed.Format}"));
         var effects = await BatchEffects.ApplyAsync(db, entity, entity.Results, Lab, now, default);
         Assert.Null(effects.Conflict);
+        await using var transaction = await db.Database.BeginTransactionAsync();
         await db.SaveChangesAsync();
+        await effects.WriteAsync(db, now);
+        await transaction.CommitAsync();
     }
 }
