@@ -11,23 +11,23 @@ namespace CommunityLead.Api.Auth;
 /// most one entry per live key and a flood of wrong keys adds nothing. A key revoked here (the keys command, in this
 /// process) is dropped at once; on another instance it keeps working for at most <see cref="Lifetime"/>.
 /// </summary>
-public sealed class VerifiedKeys
+public sealed class VerifiedKeys(TimeProvider clock)
 {
     public static readonly TimeSpan Lifetime = TimeSpan.FromSeconds(10);
 
-    private readonly ConcurrentDictionary<string, (ApiKeyService.Verified Key, long Until)> verified = new();
+    private readonly ConcurrentDictionary<string, (ApiKeyService.Verified Key, DateTimeOffset Until)> verified = new();
 
     public ApiKeyService.Verified? Find(string presented)
     {
         var fingerprint = Fingerprint(presented);
         if (!verified.TryGetValue(fingerprint, out var entry)) return null;
-        if (Environment.TickCount64 < entry.Until) return entry.Key;
+        if (clock.GetUtcNow() < entry.Until) return entry.Key;
         verified.TryRemove(fingerprint, out _);
         return null;
     }
 
     public void Remember(string presented, ApiKeyService.Verified key) =>
-        verified[Fingerprint(presented)] = (key, Environment.TickCount64 + (long)Lifetime.TotalMilliseconds);
+        verified[Fingerprint(presented)] = (key, clock.GetUtcNow() + Lifetime);
 
     /// <summary>After a key is revoked: nothing verified before it is trusted again without a look-up.</summary>
     public void Forget() => verified.Clear();
