@@ -1,7 +1,7 @@
 namespace CommunityLead.Api.Data;
 
 /// <summary>
-/// Every column a health report reads (ReportKits), by table. The ReportInputsVersion migration gave each table
+/// Every column a health report reads (ReportKits), by table. The ReportInputsVersion migrations gave each table
 /// triggers that raise ReportInputs.Version on an insert, a delete, a truncate and an update of these columns, and only
 /// these: a kit's state or a letter's sent mark changes often and moves no count. ReportReleaseTests fails if a report
 /// query reads a column missing here, or if updating one listed here stops raising the version (a later migration that

@@ -7,16 +7,6 @@ namespace CommunityLead.Api.Data.Migrations
     /// <inheritdoc />
     public partial class ReportInputsVersion : Migration
     {
-        // As this migration made them (ReportInputColumns says why); what reports read later goes in a migration of its own.
-        private static readonly (string Table, string Columns)[] Inputs =
-        [
-            ("Households", "\"Id\", \"AreaCode\", \"WaterSource\", \"YearBuilt\", \"ServiceLine\", \"ChildUnder6\""),
-            ("Kits", "\"Id\", \"Kind\", \"HouseholdId\", \"IssuedAtUtc\", \"CollectedAtUtc\", \"ReceivedAt\", \"Band\", \"LeadBand\", \"CopperBand\""),
-            ("LabResults", "\"KitId\", \"LabBatchId\", \"Bottle\", \"Position\", \"Analyte\", \"Value\", \"Qualifier\", \"SupersededAtUtc\""),
-            ("LabBatches", "\"Id\", \"Status\""),
-            ("Letters", "\"KitId\", \"DaysFromCollection\""),
-        ];
-
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
@@ -40,7 +30,7 @@ namespace CommunityLead.Api.Data.Migrations
             // Every write to what a health report counts raises the version, whichever code wrote it (EF Core's
             // change tracker, a set-based statement or a hand-written repair), so a cached protected table set can
             // never outlive the data it was decided on. SQLite has only row triggers, and no TRUNCATE; one writer at a time.
-            foreach (var (table, columns) in Inputs)
+            foreach (var (table, columns) in ReportInputsVersionTables.Inputs)
                 foreach (var change in new[] { "INSERT", "DELETE", $"UPDATE OF {columns}" })
                     migrationBuilder.Sql($"CREATE TRIGGER \"{table}_{change.Split(' ')[0]}_ReportInputs\" AFTER {change} ON \"{table}\" " +
                                          "BEGIN UPDATE \"ReportInputs\" SET \"Version\" = \"Version\" + 1; END;");
@@ -49,7 +39,7 @@ namespace CommunityLead.Api.Data.Migrations
         /// <inheritdoc />
         protected override void Down(MigrationBuilder migrationBuilder)
         {
-            foreach (var (table, _) in Inputs)
+            foreach (var (table, _) in ReportInputsVersionTables.Inputs)
                 foreach (var change in new[] { "INSERT", "DELETE", "UPDATE" })
                     migrationBuilder.Sql($"DROP TRIGGER IF EXISTS \"{table}_{change}_ReportInputs\";");
             migrationBuilder.DropTable(

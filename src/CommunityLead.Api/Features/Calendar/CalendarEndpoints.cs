@@ -1,4 +1,5 @@
 using CommunityLead.Api.Infrastructure;
+using Microsoft.AspNetCore.Http.HttpResults;
 
 namespace CommunityLead.Api.Features.Calendar;
 
@@ -12,6 +13,6 @@ public static class CalendarEndpoints
         app.MapGet("/api/calendar", Get).AllowAnonymous().WithTags("Calendar").WithName("getCalendar")
             .WithSummary("The program's time zone (Program:TimeZone) and today's date in it (no key needed)");
 
-    private static Microsoft.AspNetCore.Http.HttpResults.Ok<ProgramCalendarInfo> Get(ProgramCalendar calendar) =>
+    private static Ok<ProgramCalendarInfo> Get(ProgramCalendar calendar) =>
         TypedResults.Ok(new ProgramCalendarInfo(calendar.Zone.Id, calendar.Today()));
 }

@@ -7,16 +7,6 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
     /// <inheritdoc />
     public partial class ReportInputsVersion : Migration
     {
-        // As this migration made them (ReportInputColumns says why); what reports read later goes in a migration of its own.
-        private static readonly (string Table, string Columns)[] Inputs =
-        [
-            ("Households", "\"Id\", \"AreaCode\", \"WaterSource\", \"YearBuilt\", \"ServiceLine\", \"ChildUnder6\""),
-            ("Kits", "\"Id\", \"Kind\", \"HouseholdId\", \"IssuedAtUtc\", \"CollectedAtUtc\", \"ReceivedAt\", \"Band\", \"LeadBand\", \"CopperBand\""),
-            ("LabResults", "\"KitId\", \"LabBatchId\", \"Bottle\", \"Position\", \"Analyte\", \"Value\", \"Qualifier\", \"SupersededAtUtc\""),
-            ("LabBatches", "\"Id\", \"Status\""),
-            ("Letters", "\"KitId\", \"DaysFromCollection\""),
-        ];
-
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
@@ -52,7 +42,7 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
                 $$;
                 """);
             // TRUNCATE fires no row trigger: a statement trigger of its own catches it.
-            foreach (var (table, columns) in Inputs)
+            foreach (var (table, columns) in ReportInputsVersionTables.Inputs)
                 migrationBuilder.Sql($"""
                     CREATE CONSTRAINT TRIGGER "{table}_ReportInputs" AFTER INSERT OR UPDATE OF {columns} OR DELETE ON "{table}"
                         DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION report_inputs_changed();
@@ -64,7 +54,7 @@ namespace CommunityLead.Api.Data.Migrations.Postgres
         /// <inheritdoc />
         protected override void Down(MigrationBuilder migrationBuilder)
         {
-            foreach (var (table, _) in Inputs)
+            foreach (var (table, _) in ReportInputsVersionTables.Inputs)
                 migrationBuilder.Sql($"""
                     DROP TRIGGER IF EXISTS "{table}_ReportInputs_Truncate" ON "{table}";
                     DROP TRIGGER IF EXISTS "{table}_ReportInputs" ON "{table}";
