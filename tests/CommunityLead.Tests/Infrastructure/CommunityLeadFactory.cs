@@ -3,6 +3,7 @@ using CommunityLead.Api.Auth;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Data.Sqlite;
+using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.DependencyInjection.Extensions;
 using Microsoft.Extensions.Hosting;
@@ -95,17 +96,11 @@ public sealed class CommunityLeadFactory : WebApplicationFactory<Program>
             return host;
         using var scope = host.Services.CreateScope();
         var db = scope.ServiceProvider.GetRequiredService<CommunityLead.Api.Data.CommunityLeadDb>();
-        var known = db.Areas.Select(a => a.Code).ToHashSet();
-        foreach (var code in Areas.Where(c => !known.Contains(c)))
-            db.Areas.Add(new CommunityLead.Api.Data.Entities.Area { Code = code, Name = code });
-        try
-        {
-            db.SaveChanges();
-        }
-        catch (Microsoft.EntityFrameworkCore.DbUpdateException) when (Areas.All(c => Microsoft.EntityFrameworkCore.EntityFrameworkQueryableExtensions.AsNoTracking(db.Areas).Any(a => a.Code == c)))
-        {
-            // Two instances started together on one database (TwoInstancesTests): the other listed them first.
-        }
+        // ON CONFLICT DO NOTHING (both stores): two instances started together on one database (TwoInstancesTests)
+        // may list the same areas at once, and a lost insert race must not be logged as the service's error.
+        foreach (var code in Areas)
+            db.Database.ExecuteSqlInterpolated(
+                $"INSERT INTO \"Areas\" (\"Code\", \"Active\", \"Name\") VALUES ({code}, TRUE, {code}) ON CONFLICT DO NOTHING");
         return host;
     }
 
