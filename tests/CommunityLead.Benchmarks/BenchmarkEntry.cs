@@ -6,6 +6,8 @@ namespace CommunityLead.Benchmarks;
 public static class BenchmarkEntry
 {
     // table      the README's performance table, through HTTP against the service's own process
+    // seed DB N  a migrated store at DB with N received water kits, and DB.csv: the lab's batch for them (for profiling
+    //            the service by hand: README, Speed)
     // empty-app  the baseline web app the table starts (not for people)
     // otherwise  BenchmarkDotNet's switcher over the in-process benchmarks (--filter '*')
     public static async Task<int> Main(string[] args)
@@ -14,6 +16,13 @@ public static class BenchmarkEntry
         {
             case "table": return await PerformanceTable.RunAsync(args[1..]);
             case "empty-app": EmptyApp.Run(args[1..]); return 0;
+            case "seed" when args.Length == 3 && int.TryParse(args[2], out var kits) && kits > 0:
+                await Served.CommandAsync(Path.GetFullPath(args[1]), "migrate");
+                await File.WriteAllBytesAsync(args[1] + ".csv", Batches.Csv(StoreSeeder.ReceivedKits(Path.GetFullPath(args[1]), kits)));
+                return 0;
+            case "seed":
+                Console.Error.WriteLine("usage: seed DATABASE KITS (a new SQLite file, a whole number of kits)");
+                return 2;
             default: BenchmarkSwitcher.FromAssembly(typeof(BenchmarkEntry).Assembly).Run(args); return 0;
         }
     }

@@ -8,7 +8,7 @@ using System.Text;
 namespace CommunityLead.Benchmarks.Http;
 
 /// <summary>
-/// The README's performance table, measured end to end: the service's Release build in its own process on Kestrel,
+/// The README's performance table, measured end to end: the service published as deploy/ does, in its own process on Kestrel,
 /// traffic over 127.0.0.1, each figure beside a baseline measured in the same run on the same machine.
 /// <c>dotnet run -c Release --project tests/CommunityLead.Benchmarks -- table [--quick]</c>; --quick shortens the
 /// load runs to 10 s and the summary store to 200,000 kits; <c>--only reads,ingest</c> measures only the parts named
@@ -33,6 +33,8 @@ internal sealed class PerformanceTable(bool quick)
         bool Wanted(string part) => only.Length == 0 || only.Contains(part);
         try
         {
+            // --build-only: the Release build as it is, JIT-compiled (quicker to iterate on; not what deploy/ runs).
+            if (!args.Contains("--build-only")) RepoPaths.PublishService(Path.Combine(table.folder, "service"));
             if (Wanted("reads")) await table.StartUpAndKitReadsAsync();
             if (Wanted("ingest")) await table.IngestAsync();
             if (Wanted("letters")) await table.LettersAsync();
@@ -94,13 +96,20 @@ internal sealed class PerformanceTable(bool quick)
 
     private async Task IngestAsync()
     {
-        var (database, codes) = await StoreAsync("ingest", 5_000);
+        var (database, all) = await StoreAsync("ingest", 5_200);
+        // The first 200 kits' batch is the service's first after it started (EF Core's queries compiled, code JIT-compiled
+        // to its first tier): it is timed on its own, and the 10,000-row batch comes after it, as on a service that has run.
+        var (first, codes) = (all.Take(200).ToList(), all.Skip(200).ToList());
         var lab = await Served.KeyAsync(database, "lab");
         var csv = Batches.Csv(codes);
         var baseline = Baselines.InsertRows(folder, codes);
         using var server = await Served.ServiceAsync(database);
         using var client = server.Client(lab);
         var idleMemory = server.Process.Memory();
+        var firstClock = Stopwatch.StartNew();
+        var firstResponse = await Batches.PostAsync(client, "PERF-FIRST", Batches.Csv(first, seed: 3));
+        if (firstResponse.StatusCode != HttpStatusCode.Created) throw new InvalidOperationException($"first batch: {(int)firstResponse.StatusCode}");
+        Add("the service's first batch after start-up: 400 rows, 200 kits", Seconds(firstClock.Elapsed), "", "", "");
         var cpuBefore = server.Process.CpuTime();
         var clock = Stopwatch.StartNew();
         var response = await Batches.PostAsync(client, "PERF-INGEST", csv);
@@ -111,7 +120,7 @@ internal sealed class PerformanceTable(bool quick)
         Add("10,000-row CSV batch, 5,000 kits: read, check, QC, store, interpret (one POST)", Seconds(took),
             $"{Ms(baseline)} (the rows alone, prepared INSERTs, one transaction)", Ratio(took, baseline), "≤ 2 s, ≤ 10× the baseline");
         Add("  the service's CPU time for that POST (independent of other load on the machine)", Seconds(cpu), "", "", "");
-        Add("  peak memory of that POST above idle", Mb(server.Process.PeakMemory() - idleMemory), "", "", "< 300 MB");
+        Add("  peak memory of the two POSTs above idle", Mb(server.Process.PeakMemory() - idleMemory), "", "", "< 300 MB");
 
         if (quick) return;
         var (large, largeCodes) = await StoreAsync("ingest-large", 50_000);
