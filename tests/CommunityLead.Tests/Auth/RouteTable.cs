@@ -78,6 +78,8 @@ public static class RouteTable
 
         ["GET /api/kits/{code}/letter"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Get, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/letter")),
+        ["GET /api/kits/{code}/letter/words"] = Coordinator(HttpStatusCode.OK,
+            async s => Send(HttpMethod.Get, $"/api/kits/{await s.InterpretedKitAsync(firstDrawLead: 3.2)}/letter/words")),
         ["POST /api/kits/{code}/letter/sent"] = Coordinator(HttpStatusCode.OK,
             async s => Send(HttpMethod.Post, $"/api/kits/{(await s.LetterAsync()).Code}/letter/sent", new { })),
         ["GET /api/kits/{code}/letters"] = Coordinator(HttpStatusCode.OK,

@@ -15,8 +15,8 @@ namespace CommunityLead.Tests.Browser;
 /// <summary>
 /// The coordinator's and the lab's day in a real browser, against the service on a socket: sign-in, sign-up,
 /// a stale edit, a kit and its label (scanned back from the PDF), receipt by "scanner", a refused and then an
-/// accepted lab CSV, the urgent call on Today, the kit's page (interpretation, the held letter's preview, the letter
-/// printed, its words, downloaded again and marked sent), and the same pages again in Spanish.
+/// accepted lab CSV, the urgent call on Today, the kit's page (interpretation, the held letter's words and PDF preview,
+/// the letter printed, its words, downloaded again and marked sent), and the same pages again in Spanish.
 /// </summary>
 // Pages, the API description and the README are the same whichever store is behind them: the PostgreSQL run
 // of .ci/run leaves these out (Store=Independent).
@@ -128,6 +128,7 @@ public class ConsoleWalkTests
         await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), analyzed);
         await Expect(page.Locator("#problem-table")).ToContainTextAsync("Row 2");
         await Expect(page.Locator("#problem-table pre").First).ToContainTextAsync("12O");
+        await Expect(page.Locator("#problem-table td:last-child").First).ToContainTextAsync("not a number");
         await browser.CheckAsync("05-lab-refused-en");
         await PostCsvAsync(page, "good.csv", LabCsv(code, firstDraw: "120", unit: "ug/L"), analyzed);
         await Expect(page.Locator("#status")).ToContainTextAsync("was received");
@@ -153,6 +154,7 @@ public class ConsoleWalkTests
         await Expect(page.Locator("#bottles")).ToContainTextAsync("water stood 8.0 h");
         await Expect(page.Locator("#results")).ToContainTextAsync("120");
         await Expect(page.Locator("#meaning .tag").First).ToHaveTextAsync("Urgent");
+        await Expect(page.Locator("#letter-preview.held #letter-words section")).ToHaveCountAsync(4);
         var preview = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { Name = "Print the letter (PDF)" }).ClickAsync());
         Assert.EndsWith("-preview.pdf", preview.SuggestedFilename);
         await Expect(page.Locator("#letter-status")).ToContainTextAsync("This is a preview");
@@ -172,6 +174,7 @@ public class ConsoleWalkTests
         Assert.StartsWith("%PDF", Encoding.ASCII.GetString((await File.ReadAllBytesAsync(letterFile))[..4]));
         await Expect(page.Locator("#letter-status")).ToContainTextAsync("recorded");
         await Expect(page.Locator("#letter-words section")).ToHaveCountAsync(4);
+        await Expect(page.Locator("#letter-held")).ToBeHiddenAsync();
         var again = await page.RunAndWaitForDownloadAsync(() => page.GetByRole(AriaRole.Button, new() { NameRegex = new Regex("^PDF of letter [0-9]+$") }).ClickAsync());
         Assert.StartsWith($"letter-{code}-", again.SuggestedFilename);
         await page.GetByRole(AriaRole.Button, new() { Name = "Mark the letter sent" }).ClickAsync();
@@ -203,6 +206,9 @@ public class ConsoleWalkTests
         await browser.SignInAsync(labKey);
         await PostCsvAsync(page, "bad.csv", LabCsv(code, firstDraw: "12O", unit: "ug/L"), analyzed, batchId: "WALK-ES");
         await Expect(page.Locator("#problem-table")).ToContainTextAsync("Fila 2");
+        // The reason is the service's, in English: marked so, and said so under the table.
+        await Expect(page.Locator("#problem-table td:last-child [lang=en]").First).ToContainTextAsync("not a number");
+        await Expect(page.Locator("#problems .english-only")).ToBeVisibleAsync();
         await browser.CheckAsync("12-lab-refused-es");
         await page.GotoAsync("/ui/");
         await browser.CheckAsync("13-home-es");

@@ -2,14 +2,18 @@ using System.IO.Compression;
 using System.Net.Http.Headers;
 using System.Text.RegularExpressions;
 using CommunityLead.Api.Auth;
+using CommunityLead.Api.Data.Entities;
+using CommunityLead.Rules.Kits;
 using CommunityLead.Tests.Auth;
 using Microsoft.Playwright;
 
 namespace CommunityLead.Tests.Browser;
 
 /// <summary>
-/// The coordinator's desk pages beside the day's walk: the letter batch and marking letters sent, a held lab batch
-/// released with a reason, the area list, and an issued kit's collection form; each read by axe in both languages, on a laptop and on a phone.
+/// The coordinator's desk pages beside the day's walk: the letter batch and marking letters sent (a mailing longer
+/// than one page of the kit list), a held lab batch released with a reason, the area list, a held letter's words on
+/// its kit page, and an issued kit's collection form; each read by axe in both languages, on a laptop and on a phone,
+/// with the service's English-only words marked and said so on the Spanish pages.
 /// </summary>
 // Pages, the API description and the README are the same whichever store is behind them: the PostgreSQL run
 // of .ci/run leaves these out (Store=Independent).
@@ -41,12 +45,19 @@ public class CoordinatorPagesTests
             await browser.SignInAsync(key);
             foreach (var language in new[] { "en", "es" })
             {
+                var spanish = language == "es";
                 await page.GotoAsync($"/ui/letters/?lang={language}");
                 await Expect(page.Locator($"tr[data-code='{held}']")).ToBeVisibleAsync();
                 await browser.CheckAsync($"40-letters-{screen}-{language}");
                 await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/lab/batches/?lang={language}");
                 await Expect(page.Locator("article.kit-card")).ToHaveCountAsync(1);
+                await Expect(page.Locator("nav a[aria-current=page]")).ToHaveAttributeAsync("href", "/ui/lab/batches/");
+                // The QC table's names in the page's language; the service's English details said so on the Spanish page.
+                await Expect(page.Locator("article.kit-card tr.failed td").First)
+                    .ToHaveTextAsync(spanish ? "Verificación de calibración · Plomo · recuperación %" : "Calibration check · Lead · recovery %");
+                await Expect(page.Locator("article.kit-card tr.failed td [lang=en]")).ToHaveCountAsync(1);
+                await Expect(page.Locator("article.kit-card .english-only")).ToHaveCountAsync(spanish ? 1 : 0);
                 await browser.CheckAsync($"41-batches-{screen}-{language}");
                 await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/areas/?lang={language}");
@@ -55,11 +66,22 @@ public class CoordinatorPagesTests
                 await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/kits/kit/?lang={language}&code={held}");
                 await Expect(page.Locator("#results td").First).ToBeVisibleAsync();
+                // The held letter's words, as for any letter, marked as not released; the page is under Kits.
+                await Expect(page.Locator("#letter-preview.held #letter-words section")).ToHaveCountAsync(4);
+                await Expect(page.Locator("#letter-held")).ToContainTextAsync(spanish ? "Retenida, no autorizada" : "Held, not released");
+                await Expect(page.Locator("nav a[aria-current=true]")).ToHaveAttributeAsync("href", "/ui/kits/");
+                await Expect(page.Locator("#results .english-only")).ToHaveCountAsync(spanish ? 1 : 0);
                 await browser.CheckAsync($"43-kit-held-{screen}-{language}");
                 await FitsAsync(page, $"{screen} {language}");
                 await page.GotoAsync($"/ui/kits/kit/?lang={language}&code={issued}");
                 await Expect(page.Locator("#collection-form")).ToBeVisibleAsync();
                 await browser.CheckAsync($"43-kit-issued-{screen}-{language}");
+                if (!spanish) continue;
+                // The urgent kit's reason on Today is the service's sentence: marked English, said so once.
+                await page.GotoAsync("/ui/today/?lang=es");
+                await Expect(page.Locator("article.kit-card [lang=en]").First).ToBeVisibleAsync();
+                await Expect(page.Locator("main .english-only")).ToHaveCountAsync(1);
+                await browser.CheckAsync($"46-today-{screen}-es");
             }
         }
 
@@ -117,6 +139,24 @@ public class CoordinatorPagesTests
         await browser.CheckAsync("45-areas-changed-en");
         var areas = await coordinator.GetStringAsync("/api/areas");
         Assert.Matches(new Regex("\"code\":\"north\",\"name\":\"[^\"]+\",\"active\":false"), areas);
+
+        // A mailing longer than one page of the kit list (200 at most, KitQueries): every kit is listed. The kits are put
+        // in the database: 201 sign-ups through the API would take most of this test's time.
+        var home = browser.App.WithDb(db => db.Kits.Where(k => k.Code == held).Select(k => k.HouseholdId).Single());
+        browser.App.WithDb(db =>
+        {
+            db.Kits.AddRange(Enumerable.Range(1, 201).Select(i => new Kit
+            {
+                Code = KitCode.NewCode(), Kind = KitKind.Water, State = KitState.Interpreted, HouseholdId = home,
+                IssuedAtUtc = Clock.UtcDateTime, UpdatedAtUtc = Clock.UtcDateTime.AddMinutes(i),
+            }));
+            return db.SaveChanges();
+        });
+        var waiting = browser.App.WithDb(db => db.Kits.Count(k => k.State == KitState.Interpreted));
+        await desk.GotoAsync("/ui/letters/");
+        await Expect(desk.Locator("#ready tbody tr")).ToHaveCountAsync(waiting);
+        await Expect(desk.Locator("#status")).ToHaveTextAsync($"{waiting} kit(s) waiting; 1 held.");
+        Assert.True(waiting > 200, $"{waiting} kits: not more than one page");
     }
 
     /// <summary>Nothing wider than the screen: long codes wrap, wide tables stack.</summary>

@@ -15,6 +15,8 @@ public static class LetterEndpoints
 {
     // GET  /api/kits/{code}/letter[?lang=es]   the letter for the current interpretation (PDF; a   coordinator
     //                                          preview while urgent/implausible items are open)
+    // GET  /api/kits/{code}/letter/words       its words as it would be printed now, held or not;   coordinator
+    //                                          nothing recorded (a held letter's in-page preview)
     // POST /api/kits/{code}/letter/sent        confirm it went out: kit → letter-sent              coordinator
     // GET  /api/kits/{code}/letters            every letter issued for the kit                     coordinator
     // GET  /api/letters/{id}                   a stored letter, rendered again byte for byte       coordinator
@@ -32,6 +34,10 @@ public static class LetterEndpoints
             .Produces(StatusCodes.Status200OK, contentType: "application/pdf").ProducesProblem(StatusCodes.Status409Conflict)
             .WithQuery<CommunityLead.Rules.Households.LetterLanguage>("lang", "The letter's language; the household's own by default")
             .WithResponseHeader(StatusCodes.Status200OK, "X-Letter-Id", "The issued letter's id, to confirm it was sent");
+        kit.MapGet("/letter/words", LetterDraftWords.Get).WithName("getKitLetterWords")
+            .WithSummary("The words of the kit's letter as it would be printed now, also while it is held (nothing is recorded)")
+            .ProducesProblem(StatusCodes.Status409Conflict)
+            .WithQuery<CommunityLead.Rules.Households.LetterLanguage>("lang", "The letter's language; the household's own by default");
         kit.MapPost("/letter/sent", LetterHandlers.MarkSent).WithName("markLetterSent")
             .WithSummary("Confirm the letter went out: the kit moves to letter-sent").ProducesProblem(StatusCodes.Status409Conflict);
         kit.MapGet("/letters", LetterHandlers.List).WithName("listKitLetters").WithSummary("Every letter issued for the kit");

@@ -16,17 +16,11 @@ public static class LetterHandlers
     public static async Task<Results<FileContentHttpResult, ValidationProblem, ProblemHttpResult>> Get(
         string code, CommunityLeadDb db, LetterIssuing issuing, HttpContext http, CancellationToken ct, string? lang = null)
     {
-        LetterLanguage? language = null;
-        if (lang is not null)
-        {
-            if (!KebabEnum.TryParse<LetterLanguage>(lang, out var l)) return Problems.Field("lang", "Use en or es.");
-            language = l;
-        }
+        if (!TryLanguage(lang, out var language)) return Problems.Field("lang", "Use en or es.");
         var (kit, invalid, missing) = await KitLookup.FindAsync(db, code, ct);
         if (invalid is not null) return invalid;
         if (kit is null) return missing!;
-        if (kit.State is not (KitState.Interpreted or KitState.LetterSent or KitState.Closed))
-            return NotReady(kit.Code, kit.State);
+        if (!HasLetter(kit.State)) return NotReady(kit.Code, kit.State);
         var release = (await LetterRelease.ForAsync(db, [kit.Id], ct)).Of(kit.Id);
         if (!release.Released)
         {
@@ -125,7 +119,19 @@ public static class LetterHandlers
         return TypedResults.Ok(Features.Results.ResultLookup.Words(letter, issuing.Read(letter)));
     }
 
-    private static ProblemHttpResult NotReady(string code, KitState state) =>
+    /// <summary>A letter's language asked for by ?lang=; none asked: the household's own.</summary>
+    internal static bool TryLanguage(string? lang, out LetterLanguage? language)
+    {
+        language = null;
+        if (lang is null) return true;
+        if (!KebabEnum.TryParse<LetterLanguage>(lang, out var parsed)) return false;
+        language = parsed;
+        return true;
+    }
+
+    internal static bool HasLetter(KitState state) => state is KitState.Interpreted or KitState.LetterSent or KitState.Closed;
+
+    internal static ProblemHttpResult NotReady(string code, KitState state) =>
         TypedResults.Problem(statusCode: 409, title: "This kit has no interpretation for a letter yet.",
             detail: $"Kit {code} is {KebabEnum.Name(state)}; a letter is written once its results are in and interpreted.",
             extensions: new Dictionary<string, object?> { ["currentState"] = KebabEnum.Name(state) });

@@ -126,10 +126,14 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
     /// </summary>
     public async Task<byte[]?> PreviewAsync(int kitId, LetterLanguage? language, CancellationToken ct)
     {
-        var draft = (await DraftAsync([kitId], language, ct)).SingleOrDefault();
-        return draft is null ? null
-            : PreviewStamp.Apply(layout.Render(draft.Content), PreviewWords.For(draft.Language), PreviewWords.Watermark(draft.Language));
+        var content = await ContentAsync(kitId, language, ct);
+        return content is null ? null
+            : PreviewStamp.Apply(layout.Render(content), PreviewWords.For(content.Language), PreviewWords.Watermark(content.Language));
     }
+
+    /// <summary>The kit's letter as it would go out now, worded but neither rendered nor recorded; null as for a preview.</summary>
+    public async Task<LetterContent?> ContentAsync(int kitId, LetterLanguage? language, CancellationToken ct) =>
+        (await DraftAsync([kitId], language, ct)).SingleOrDefault()?.Content;
 
     private sealed record Draft(int KitId, string KitCode, KitInterpretation Stored, LetterLanguage Language, LetterKind Kind,
         DateOnly CollectedOn, LetterContent Content);

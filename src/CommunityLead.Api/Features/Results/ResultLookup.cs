@@ -29,8 +29,10 @@ public static class ResultLookup
 
     /// <summary>The letter's words in the order the letter prints them; the coordinator's preview shows the same.</summary>
     public static HouseholdResult Words(IssuedLetter letter, LetterContent c) =>
-        new(letter.KitCode, c.Language, c.Title, c.KitFacts, c.Results, [c.Meaning, c.Steps, c.Cautions, c.WhoToCall], c.Closing,
-            letter.IssuedAtUtc);
+        new(letter.KitCode, c.Language, c.Title, c.KitFacts, c.Results, Sections(c), c.Closing, letter.IssuedAtUtc);
+
+    /// <summary>The letter's sections in the order it prints them (the scales and signature are the PDF's alone).</summary>
+    public static IReadOnlyList<LetterSection> Sections(LetterContent c) => [c.Meaning, c.Steps, c.Cautions, c.WhoToCall];
 
     public static async Task<Results<FileContentHttpResult, ProblemHttpResult>> Letter(
         ResultRequest request, HttpContext http, CommunityLeadDb db, LetterIssuing letters, ResultThrottle throttle, CancellationToken ct)

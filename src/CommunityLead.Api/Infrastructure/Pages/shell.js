@@ -1,6 +1,6 @@
 // What every page shares: the header (program name, the pages of this person's work, language, sign-out), the
 // sign-in form, and turning API refusals into words. A page calls startPage with what it does once signed in.
-import { applyStrings, loadStrings, switchLanguage, t } from './i18n.js';
+import { applyStrings, language, loadStrings, switchLanguage, t } from './i18n.js';
 import { ApiError, session } from './session.js';
 import { el } from './dom.js';
 
@@ -14,9 +14,22 @@ const NAV = {
   household: [['/ui/result/', 'nav.result']],
 };
 
+/**
+ * The nav link this page falls under: its own, or its section's (the kit page /ui/kits/kit/ is under Kits), as the
+ * longest link the path starts with. The own page is aria-current="page"; a section only "true", since its link
+ * leads elsewhere.
+ */
+function current(links) {
+  const path = location.pathname.replace(/index\.html$/, '').replace(/([^/])$/, '$1/');
+  const href = links.map(([h]) => h).filter(h => path.startsWith(h)).sort((a, b) => b.length - a.length)[0];
+  return { href, value: href === path ? 'page' : 'true' };
+}
+
 function header(area, needsKey) {
-  const links = (NAV[area] || []).map(([href, key]) => el('li', {}, el('a', {
-    href, 'aria-current': location.pathname === href ? 'page' : null,
+  const pages = NAV[area] || [];
+  const here = current(pages);
+  const links = pages.map(([href, key]) => el('li', {}, el('a', {
+    href, 'aria-current': href === here.href ? here.value : null,
   }, t(key))));
   const tools = el('div', { class: 'shell-tools' },
     el('button', { type: 'button', lang: t('shell.otherLanguageCode'), onclick: switchLanguage }, t('shell.otherLanguage')),
@@ -49,6 +62,19 @@ function signInForm(area, message, onSignedIn) {
     onSignedIn();
   });
   return { form, input };
+}
+
+/**
+ * Words the service writes in English only (a rule profile's explanation of a level, a QC detail, a collection
+ * flag's reason): marked lang="en", so a screen reader reads them as English.
+ */
+export function fromService(text, tag = 'span', attributes = {}) {
+  return el(tag, { ...attributes, lang: 'en' }, text);
+}
+
+/** On a page in another language, the line that says such words are in English, where they appear (none in English). */
+export function englishOnly(key = 'shell.englishOnly') {
+  return language() === 'en' ? null : el('p', { class: 'hint english-only' }, t(key));
 }
 
 /** Words for a refused call: the page's own for the statuses a person can act on, else the service's title. */

@@ -1,6 +1,6 @@
 // Today: the kits that need a person, one card per kit with every reason, the household's name and phone, most
 // urgent first. A note resolves all the kit's open reasons (for an urgent result, that releases its letter).
-import { startPage, report, t } from '/ui/shell.js';
+import { startPage, report, t, englishOnly, fromService } from '/ui/shell.js';
 import { api } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
 import { formatDate } from '/ui/i18n.js';
@@ -26,7 +26,7 @@ function card(kit, index) {
         : el('span', {}, t('today.noPhone')),
       el('span', { class: 'hint' }, t(`language.${kit.language}`))),
     el('ul', { class: 'reasons' }, kit.reasons.map(r => el('li', {},
-      el('span', { class: `tag ${r.reason}` }, t(`flag.${r.reason}`)), ' ', r.detail, ' ',
+      el('span', { class: `tag ${r.reason}` }, t(`flag.${r.reason}`)), ' ', fromService(r.detail), ' ',
       el('span', { class: 'hint' }, t('today.raised', { when: formatDate(r.raisedAt) }))))),
     form);
   form.addEventListener('submit', async event => {
@@ -54,6 +54,9 @@ startPage({
   area: 'coordinator',
   run: async () => {
     const kits = await api('/api/attention/kits');
+    // Each reason's sentence is the service's, in English: said once above the cards.
+    const note = kits.length ? englishOnly('today.reasonsInEnglish') : null;
+    if (note) byId('kits').before(note);
     byId('kits').replaceChildren(...kits.map(card));
     if (!kits.length) showEmpty();
   },

@@ -1,6 +1,6 @@
 // Lab upload: post a CSV or JSON batch as the lab's key. A refused batch (422) is shown problem by problem beside
 // the text of its row, so the lab can fix the file and post it again; an accepted one shows its verdict and QC.
-import { startPage, report, t } from '/ui/shell.js';
+import { startPage, report, t, englishOnly, fromService } from '/ui/shell.js';
 import { api, ApiError } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
 import { withOffset } from '/ui/times.js';
@@ -26,6 +26,19 @@ function rowName(row) {
   return line ? t('lab.rowNumber', { n: line[1] }) : row || t('lab.wholeBatch');
 }
 
+/**
+ * Each problem with its reason. The service says each reason once, in errors under the problem's key (a row and
+ * column may have several): the nth problem of a key has the nth reason.
+ */
+function problemsOf(refusal) {
+  const seen = new Map();
+  return (refusal.problems || []).map(p => {
+    const n = seen.get(p.key) ?? 0;
+    seen.set(p.key, n + 1);
+    return { ...p, reason: refusal.errors?.[p.key]?.[n] ?? '' };
+  });
+}
+
 function showProblems(problems, text, csv) {
   byId('outcome').hidden = true;
   byId('problem-table').replaceChildren(el('table', {},
@@ -35,7 +48,7 @@ function showProblems(problems, text, csv) {
       el('td', {}, rowName(p.row)),
       el('td', {}, el('pre', { class: 'row-text' }, rowText(p.row, text, csv))),
       el('td', {}, p.field || ''),
-      el('td', {}, p.reason))))));
+      el('td', {}, fromService(p.reason)))))), problems.length ? englishOnly() : null);
   byId('problems').hidden = false;
   byId('problems-title').focus();
 }
@@ -44,7 +57,7 @@ function showOutcome(batch) {
   byId('problems').hidden = true;
   const checks = batch.qc?.checks || batch.qcChecks || [];
   byId('outcome-body').replaceChildren(
-    el('p', {}, t('lab.outcome', { id: batch.batchId, version: batch.version, status: batch.status ?? batch.verdict ?? '' })),
+    el('p', {}, t('lab.outcome', { id: batch.batchId, version: batch.version, status: t(`batchStatus.${batch.status}`) })),
     checks.length ? qcTable(checks) : null);
   byId('outcome').hidden = false;
   byId('outcome-title').focus();
@@ -75,7 +88,7 @@ async function post(event) {
   } catch (error) {
     if (error instanceof ApiError && error.status === 422) {
       say(status, t('lab.refused'), 'error');
-      showProblems(error.problem.problems || [], text, csv);
+      showProblems(problemsOf(error.problem), text, csv);
       return;
     }
     report(error, status);

@@ -20,16 +20,32 @@ function row(kit, held) {
       : el('span', { class: 'tag' }, t('letters.ready'))));
 }
 
+// The most the kit list gives in one page (KitQueries): a mailing can be longer, so it is read page by page.
+const PAGE_SIZE = 200;
+
+/**
+ * Every interpreted kit, oldest change first. A kit changed while the pages are read moves to the end of the list
+ * and may come twice: it is kept once.
+ */
+async function interpretedKits() {
+  const kits = new Map();
+  for (let page = 1; ; page++) {
+    const answer = await api(`/api/kits?state=interpreted&pageSize=${PAGE_SIZE}&page=${page}`);
+    for (const kit of answer.items) if (!kits.has(kit.code)) kits.set(kit.code, kit);
+    if (answer.items.length < PAGE_SIZE || page * PAGE_SIZE >= answer.total) return [...kits.values()];
+  }
+}
+
 async function load() {
-  const [page, attention] = await Promise.all([api('/api/kits?state=interpreted&pageSize=200'), api('/api/attention/kits')]);
+  const [kits, attention] = await Promise.all([interpretedKits(), api('/api/attention/kits')]);
   const held = new Set(attention.filter(a => a.reasons.some(r => HOLDS_LETTER.includes(r.reason))).map(a => a.kitCode));
-  say(byId('status'), t('letters.count', { count: page.total, held: page.items.filter(k => held.has(k.code)).length }));
-  byId('ready').replaceChildren(page.items.length ? el('table', { class: 'stack' },
+  say(byId('status'), t('letters.count', { count: kits.length, held: kits.filter(k => held.has(k.code)).length }));
+  byId('ready').replaceChildren(kits.length ? el('table', { class: 'stack' },
     el('caption', {}, t('letters.readyCaption')),
     el('thead', {}, el('tr', {}, el('th', { scope: 'col' }, t('letters.sent')),
       ['kits.code', 'households.area', 'kits.updated', 'letters.letter'].map(k => el('th', { scope: 'col' }, t(k))))),
-    el('tbody', {}, page.items.map(k => row(k, held.has(k.code))))) : '');
-  byId('mark').hidden = !page.items.some(k => !held.has(k.code));
+    el('tbody', {}, kits.map(k => row(k, held.has(k.code))))) : '');
+  byId('mark').hidden = !kits.some(k => !held.has(k.code));
 }
 
 async function batch() {

@@ -20,12 +20,29 @@ async function interpretation() {
   }
 }
 
-async function preview(letter) {
-  const words = await api(`/api/letters/${letter.id}/words`);
+/** A letter's words on the page; held: a letter not released yet, framed and captioned so nobody takes it for one to mail. */
+function showWords(words, held = false) {
   const box = byId('letter-words');
   box.lang = words.language;
   box.replaceChildren(...letterWords(words, { titleId: 'preview-title', level: 3 }));
+  byId('letter-held').hidden = !held;
+  byId('preview-caption').textContent = t(held ? 'kit.heldCaption' : 'kit.previewCaption');
+  byId('letter-preview').classList.toggle('held', held);
   byId('letter-preview').hidden = false;
+}
+
+async function preview(letter) {
+  showWords(await api(`/api/letters/${letter.id}/words`));
+}
+
+/**
+ * The letter as it would be printed now, in the chosen language, when it is held (an urgent or implausible item open
+ * on Today): no letter is issued then, so there are no stored words to show. Null when the letter is released.
+ */
+async function heldDraft() {
+  const lang = byId('letter-language').value;
+  const draft = await api(`/api/kits/${encodeURIComponent(code)}/letter/words${lang ? `?lang=${lang}` : ''}`);
+  return draft.released ? null : draft;
 }
 
 function letterRows(letters) {
@@ -67,8 +84,10 @@ async function markSent() {
 
 async function load({ keepStatus = false } = {}) {
   const kit = await api(`/api/kits/${encodeURIComponent(code)}`);
-  const [letters, meaning] = await Promise.all([
-    HAS_LETTER.includes(kit.state) ? api(`/api/kits/${encodeURIComponent(kit.code)}/letters`) : [], interpretation()]);
+  // Only an interpreted kit's letter can be held (a corrected result takes a sent kit back through interpreted).
+  const [letters, meaning, held] = await Promise.all([
+    HAS_LETTER.includes(kit.state) ? api(`/api/kits/${encodeURIComponent(kit.code)}/letters`) : [], interpretation(),
+    kit.state === 'interpreted' ? heldDraft() : null]);
   byId('kit-title').replaceChildren(t('kit.titleOf'), ' ', el('span', { class: 'code' }, kit.code));
   byId('kit-summary').replaceChildren(el('span', {}, word('kind', kit.kind), ' · ', el('strong', { id: 'kit-state' }, word('state', kit.state)),
     kit.stateReason ? ` (${kit.stateReason})` : '',
@@ -82,7 +101,9 @@ async function load({ keepStatus = false } = {}) {
   byId('letter-get').disabled = !HAS_LETTER.includes(kit.state);
   byId('letter-sent').hidden = kit.state !== 'interpreted' || !letters.length;
   if (!keepStatus) say(byId('letter-status'), HAS_LETTER.includes(kit.state) ? '' : t('kit.noLetterYet'), 'warn');
-  if (letters.length) await preview(letters[letters.length - 1]);
+  byId('letter-language').onchange = held ? () => heldDraft().then(d => d && showWords(d, true)).catch(e => report(e, byId('letter-status'))) : null;
+  if (held) showWords(held, true);
+  else if (letters.length) await preview(letters[letters.length - 1]);
   showCollection(kit, async message => {
     await load();
     say(byId('status'), message);

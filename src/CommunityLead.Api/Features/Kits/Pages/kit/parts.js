@@ -1,6 +1,6 @@
 // The kit page's read-only parts: the timeline (the kit's history with its letters), the bottles with their
 // standing time and flags, the results and what they mean. Each takes the API's answer and returns elements.
-import { t } from '/ui/shell.js';
+import { englishOnly, fromService, t } from '/ui/shell.js';
 import { el } from '/ui/dom.js';
 import { formatDate, formatNumber, language } from '/ui/i18n.js';
 
@@ -34,6 +34,15 @@ export function timeline(kit, letters) {
     e.note ? el('span', { class: 'hint' }, e.note) : null));
 }
 
+/**
+ * A collection flag: its severity, and the service's sentence (English only). On a page in another language the
+ * flag's kind comes first in that language, so the sentence's gist is never only in English.
+ */
+function flag(f) {
+  return [el('span', { class: `tag ${f.severity}` }, word('severity', f.severity)), ' ',
+    language() === 'en' ? null : [el('strong', {}, word('collectionFlag', f.code)), ': '], fromService(f.message)];
+}
+
 export function bottles(kit) {
   if (!kit.samples.length) return el('p', {}, t('kit.noBottles'));
   const flagsOf = s => kit.flags.filter(f => f.bottle === s.bottle && (f.position ?? null) === (s.position ?? null));
@@ -44,9 +53,9 @@ export function bottles(kit) {
       s.standingMinutes != null ? ` · ${t('kit.stood', { hours: formatNumber(s.standingMinutes / 60, 1) })}` : '',
       s.flushSeconds != null ? ` · ${t('kit.flushed', { seconds: s.flushSeconds })}` : '',
       s.tap ? ` · ${word('tap', s.tap)}` : '',
-      flagsOf(s).map(f => el('div', {}, el('span', { class: `tag ${f.severity}` }, word('severity', f.severity)), ' ', f.message))))),
-    general.length ? el('ul', { class: 'reasons' }, general.map(f => el('li', {},
-      el('span', { class: `tag ${f.severity}` }, word('severity', f.severity)), ' ', f.message))) : null);
+      flagsOf(s).map(f => el('div', {}, flag(f)))))),
+    general.length ? el('ul', { class: 'reasons' }, general.map(f => el('li', {}, flag(f)))) : null,
+    kit.flags.length ? englishOnly() : null);
 }
 
 function value(f) {
@@ -56,16 +65,17 @@ function value(f) {
 
 export function results(meaning) {
   if (!meaning) return el('p', {}, t('kit.noResults'));
-  return el('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-labelledby': 'results-title' }, el('table', { class: 'stack' },
+  return el('div', {}, el('div', { class: 'table-wrap', tabindex: '0', role: 'region', 'aria-labelledby': 'results-title' }, el('table', { class: 'stack' },
     el('thead', {}, el('tr', {}, ['kit.sample', 'kit.analyte', 'kit.value', 'kit.level', 'kit.band'].map(k => el('th', { scope: 'col' }, t(k))))),
     el('tbody', {}, meaning.findings.map(f => el('tr', {},
       el('td', { 'data-label': t('kit.sample') }, bottleName(f)),
       el('td', { 'data-label': t('kit.analyte') }, word('analyte', f.analyte)),
       el('td', { 'data-label': t('kit.value'), class: 'num' }, value(f)),
       el('td', { 'data-label': t('kit.level') }, f.levelValue != null ? `${formatNumber(f.levelValue, 1)} ${f.unit}` : '—',
-        // The profiles word their levels in English only: marked so, for a reader on the Spanish page.
-        f.levelMeaning ? el('span', { class: 'hint', lang: 'en' }, f.levelMeaning) : null),
-      el('td', { 'data-label': t('kit.band') }, el('span', { class: `tag ${f.band}` }, word('band', f.band))))))));
+        // The profiles word their levels in English only: marked so, and said so under the table.
+        f.levelMeaning ? fromService(f.levelMeaning, 'span', { class: 'hint' }) : null),
+      el('td', { 'data-label': t('kit.band') }, el('span', { class: `tag ${f.band}` }, word('band', f.band)))))))),
+    meaning.findings.some(f => f.levelMeaning) ? englishOnly('kit.levelsInEnglish') : null);
 }
 
 export function meaningView(meaning) {
@@ -79,7 +89,9 @@ export function meaningView(meaning) {
         when: formatDate(meaning.interpretedAt), profile: `${meaning.profile.id} v${meaning.profile.version}` })) : null),
     meaning.flags.length ? el('p', {}, meaning.flags.map(f => el('span', { class: `tag ${f}` }, word('flag', f)))) : null,
     meaning.implausible.length ? el('p', { class: 'status error' }, t('kit.implausible', { count: meaning.implausible.length })) : null,
-    meaning.validity.length ? el('ul', { class: 'reasons' }, meaning.validity.map(v => el('li', {}, v.reason))) : null,
+    meaning.validity.length ? el('ul', { class: 'reasons' }, meaning.validity.map(v => el('li', {},
+      language() === 'en' ? null : [el('strong', {}, word('validity', v.code)), ': '], fromService(v.reason)))) : null,
+    meaning.validity.length ? englishOnly() : null,
     el('h3', {}, t('kit.messages')),
     el('ul', { class: 'reasons' }, meaning.messages.map(m => el('li', { lang }, lang === 'es' ? m.es : m.en))));
 }

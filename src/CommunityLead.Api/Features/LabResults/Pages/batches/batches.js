@@ -1,7 +1,7 @@
 // Held lab batches, for the coordinator: every QC figure with its window, the run's QC report, and a release with
 // a reason (the lab explained the failed check, say). Releasing puts the results into effect; the verdict stays
 // on record as the service computed it.
-import { startPage, report, t } from '/ui/shell.js';
+import { startPage, report, t, englishOnly, fromService } from '/ui/shell.js';
 import { api, download } from '/ui/session.js';
 import { el, byId, say } from '/ui/dom.js';
 import { formatDate } from '/ui/i18n.js';
@@ -46,7 +46,8 @@ function card(detail, index) {
     el('p', {}, t('batches.facts', { method: b.method, analyzed: formatDate(b.analyzedAt), results: b.resultCount,
       posted: formatDate(b.postedAt), by: b.postedBy })),
     qcTable(b.qc.checks, t('batches.qcCaption', { id: b.batchId })),
-    b.flags.length ? el('ul', { class: 'reasons' }, b.flags.map(f => el('li', {}, el('span', { class: 'code' }, f.kitCode), ' ', f.message))) : null,
+    b.flags.length ? el('ul', { class: 'reasons' }, b.flags.map(f => el('li', {}, el('span', { class: 'code' }, f.kitCode), ' ', fromService(f.message)))) : null,
+    b.flags.length ? englishOnly() : null,
     el('button', { type: 'button', class: 'quiet', onclick: () =>
       download(`/api/lab/batches/${encodeURIComponent(b.batchId)}/qc-report`, `qc-${b.batchId}.pdf`).catch(e => report(e, status)) },
       t('batches.qcReport')),
