@@ -8,6 +8,7 @@ public static class BenchmarkEntry
     // table      the README's performance table, through HTTP against the service's own process
     // seed DB N  a migrated store at DB with N received water kits, and DB.csv: the lab's batch for them (for profiling
     //            the service by hand: README, Speed)
+    // load URL KEY RATE SECONDS  GET /api/kits/{code} at RATE per second on a running service, for profiling by hand
     // empty-app  the baseline web app the table starts (not for people)
     // otherwise  BenchmarkDotNet's switcher over the in-process benchmarks (--filter '*')
     public static async Task<int> Main(string[] args)
@@ -20,6 +21,16 @@ public static class BenchmarkEntry
                 await Served.CommandAsync(Path.GetFullPath(args[1]), "migrate");
                 await File.WriteAllBytesAsync(args[1] + ".csv", Batches.Csv(StoreSeeder.ReceivedKits(Path.GetFullPath(args[1]), kits)));
                 return 0;
+            case "load" when args.Length == 5 && double.TryParse(args[3], out var rate) && int.TryParse(args[4], out var seconds):
+            {
+                using var client = new HttpClient { BaseAddress = new Uri(args[1]) };
+                client.DefaultRequestHeaders.Authorization = new("Bearer", args[2]);
+                var page = System.Text.Json.JsonDocument.Parse(await client.GetStringAsync("/api/kits?pageSize=200"));
+                var codes = page.RootElement.GetProperty("items").EnumerateArray().Select(k => k.GetProperty("code").GetString()!).ToList();
+                var result = await FixedRateLoad.RunAsync(client, i => $"/api/kits/{codes[i % codes.Count]}", rate, TimeSpan.FromSeconds(seconds));
+                Console.WriteLine(result);
+                return 0;
+            }
             case "seed":
                 Console.Error.WriteLine("usage: seed DATABASE KITS (a new SQLite file, a whole number of kits)");
                 return 2;

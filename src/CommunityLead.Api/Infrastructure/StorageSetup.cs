@@ -29,18 +29,19 @@ public static class StorageSetup
         var connectionString = configuration.GetConnectionString("CommunityLead");
         // Compiled models (Data/CompiledModels, made by `dotnet ef dbcontext optimize`): building the model from the
         // entity configurations took most of a second of CPU before the first answer. CompiledModelTests fails when
-        // one no longer matches the model the configurations build.
+        // one no longer matches the model the configurations build. Contexts are pooled (their options built once,
+        // their services kept): a kit read spent a measurable part of its time building a context's options and services.
         if (Provider(configuration) == StorageProvider.Postgres)
         {
             if (string.IsNullOrWhiteSpace(connectionString))
                 throw new SettingsException("Database:Provider is Postgres, so ConnectionStrings:CommunityLead must name the server.");
             // Handlers ask for CommunityLeadDb and get the PostgreSQL-mapped model with its own migrations.
-            services.AddDbContext<CommunityLeadDb, PostgresCommunityLeadDb>(o => o
+            services.AddDbContextPool<CommunityLeadDb, PostgresCommunityLeadDb>(o => o
                 .UseModel(Data.CompiledModels.Postgres.PostgresCommunityLeadDbModel.Instance)
                 .UseNpgsql(connectionString, npgsql => npgsql.UseParameterizedCollectionMode(ParameterTranslationMode.Parameter)));
             return;
         }
-        services.AddDbContext<CommunityLeadDb>(o => o
+        services.AddDbContextPool<CommunityLeadDb>(o => o
             .UseModel(Data.CompiledModels.Sqlite.CommunityLeadDbModel.Instance)
             .UseSqlite(connectionString ?? DefaultConnectionString,
                 sqlite => sqlite.UseParameterizedCollectionMode(ParameterTranslationMode.Parameter))
