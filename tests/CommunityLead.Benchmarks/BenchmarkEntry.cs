@@ -18,8 +18,7 @@ public static class BenchmarkEntry
             case "table": return await PerformanceTable.RunAsync(args[1..]);
             case "empty-app": EmptyApp.Run(args[1..]); return 0;
             case "seed" when args.Length == 3 && int.TryParse(args[2], out var kits) && kits > 0:
-                await Served.CommandAsync(Path.GetFullPath(args[1]), "migrate");
-                await File.WriteAllBytesAsync(args[1] + ".csv", Batches.Csv(StoreSeeder.ReceivedKits(Path.GetFullPath(args[1]), kits)));
+                await File.WriteAllBytesAsync(args[1] + ".csv", Batches.Csv(await StoreSeeder.NewStoreAsync(Path.GetFullPath(args[1]), kits)));
                 return 0;
             case "load" when args.Length == 5 && double.TryParse(args[3], out var rate) && int.TryParse(args[4], out var seconds):
             {

@@ -52,8 +52,7 @@ internal sealed class PerformanceTable(bool quick)
     private async Task<(string Database, IReadOnlyList<string> Codes)> StoreAsync(string name, int kits)
     {
         var database = Path.Combine(folder, name + ".db");
-        await Served.CommandAsync(database, "migrate");
-        return (database, StoreSeeder.ReceivedKits(database, kits));
+        return (database, await StoreSeeder.NewStoreAsync(database, kits));
     }
 
     private async Task StartUpAndKitReadsAsync()

@@ -14,6 +14,13 @@ internal static class StoreSeeder
     private static readonly string[] Areas = ["harbour", "mill-row", "north-bank", "old-town", "the-heights"];
     private static readonly string[] Lines = ["Unknown", "Lead", "Galvanized", "Copper", "Plastic"];
 
+    /// <summary>A new store at <paramref name="database"/>, migrated by the service's own command, holding <paramref name="count"/> received kits.</summary>
+    public static async Task<IReadOnlyList<string>> NewStoreAsync(string database, int count)
+    {
+        await Served.CommandAsync(database, "migrate");
+        return ReceivedKits(database, count);
+    }
+
     /// <summary>Kits received by the lab, waiting for results; their codes, valid check characters included.</summary>
     public static IReadOnlyList<string> ReceivedKits(string database, int count)
     {

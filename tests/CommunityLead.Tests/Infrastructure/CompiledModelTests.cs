@@ -46,10 +46,13 @@ public class CompiledModelTests
         }
     }
 
-    private static void AssertSame(IModel configured, IModel compiled) =>
-        Assert.True(Fingerprint(configured).SequenceEqual(Fingerprint(compiled)),
-            $"{Regenerate}\nOnly in the configured model:\n  {string.Join("\n  ", Fingerprint(configured).Except(Fingerprint(compiled)))}" +
-            $"\nOnly in the compiled model:\n  {string.Join("\n  ", Fingerprint(compiled).Except(Fingerprint(configured)))}");
+    private static void AssertSame(IModel configured, IModel compiled)
+    {
+        var (expected, actual) = (Fingerprint(configured), Fingerprint(compiled));
+        Assert.True(expected.SequenceEqual(actual),
+            $"{Regenerate}\nOnly in the configured model:\n  {string.Join("\n  ", expected.Except(actual))}" +
+            $"\nOnly in the compiled model:\n  {string.Join("\n  ", actual.Except(expected))}");
+    }
 
     /// <summary>One line per table, column, key, foreign key and index, with what the database and the mapping see.</summary>
     private static List<string> Fingerprint(IModel model)
