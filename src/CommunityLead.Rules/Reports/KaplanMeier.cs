@@ -42,8 +42,8 @@ public static class KaplanMeier
     /// </summary>
     private static List<KmStep> Steps(IReadOnlyList<CensoredValue> values)
     {
-        var detected = values.Where(v => !v.BelowLimit).Select(v => v.Value).Order().ToArray();
-        var limits = values.Where(v => v.BelowLimit).Select(v => v.Value).Order().ToArray();
+        var detected = Ascending.Of(values.Where(v => !v.BelowLimit).Select(v => v.Value));
+        var limits = Ascending.Of(values.Where(v => v.BelowLimit).Select(v => v.Value));
         var steps = new List<KmStep>();
         var share = 1.0;
         for (var top = detected.Length; top > 0;)
@@ -80,7 +80,7 @@ public static class KaplanMeier
     /// </summary>
     private static double CensoredBound(IReadOnlyList<CensoredValue> values, double p, List<KmStep> steps)
     {
-        var atLimits = values.Select(v => v.Value).Order().ToArray();
+        var atLimits = Ascending.Of(values.Select(v => v.Value));
         var rank = Math.Clamp((int)Math.Ceiling(p * atLimits.Length - Tolerance), 1, atLimits.Length);
         var substituted = atLimits[rank - 1];
         if (steps.Count == 0)

@@ -32,7 +32,7 @@ public static class NinetiethPercentile
         if (values.Count == 0)
             return null;
 
-        var ranked = values.Order().ToArray();
+        var ranked = Ascending.Of(values);
         var n = ranked.Length;
         if (n < FiveSamples)
             return new(ranked[^1], n, $"the highest of {n} results (fewer than 5: the highest is used)");

@@ -33,7 +33,8 @@ public static class SummaryStatistics
             median = Quantile(censored, 0.5);
             p75 = Quantile(censored, 0.75);
         }
-        var days = kits.Where(k => k.DaysToLetter is not null).Select(k => k.DaysToLetter!.Value).Order().ToList();
+        var days = kits.Where(k => k.DaysToLetter is not null).Select(k => k.DaysToLetter!.Value).ToList();
+        days.Sort();
         double? daysMedian = null, days90 = null;
         if (Enough(days.Count))
         {
