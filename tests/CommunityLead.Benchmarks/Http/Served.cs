@@ -30,7 +30,6 @@ internal sealed class Served : IDisposable
         {
             ["ConnectionStrings__CommunityLead"] = $"Data Source={database}",
             ["Logging__LogLevel__Default"] = "Warning",
-            ["DOTNET_gcServer"] = "0",
         });
 
     /// <summary>An ASP.NET Core app that does nothing: the floor for start-up and for latency at a given rate.</summary>
