@@ -110,7 +110,9 @@ public static class KitInterpreting
             judged[i] = (profile, outcome, JsonSerializer.Serialize(outcome, json));
         }
         if (kits.Count < 64) for (var i = 0; i < kits.Count; i++) One(i);
-        else Parallel.For(0, kits.Count, One);
+        // One worker per core at most: more are no faster, and would hold pool threads that requests arriving meanwhile
+        // (kit reads) need.
+        else Parallel.For(0, kits.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
         return judged;
     }
 
