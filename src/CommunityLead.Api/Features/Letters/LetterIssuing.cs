@@ -111,7 +111,7 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
     private LetterFile[] RenderAll(List<Draft> drafts, CancellationToken ct)
     {
         var files = new LetterFile[drafts.Count];
-        Parallel.For(0, drafts.Count, new ParallelOptions { CancellationToken = ct, MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        Parallel.For(0, drafts.Count, new ParallelOptions { CancellationToken = ct }, i =>
         {
             var pdf = layout.Render(drafts[i].Content, out var pages);
             files[i] = new LetterFile(pdf, pages, Convert.ToHexStringLower(SHA256.HashData(pdf)),
