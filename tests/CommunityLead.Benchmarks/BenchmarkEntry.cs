@@ -23,8 +23,7 @@ public static class BenchmarkEntry
                 await File.WriteAllBytesAsync(args[1] + ".csv", Batches.Csv(await StoreSeeder.NewStoreAsync(Path.GetFullPath(args[1]), kits)));
                 return 0;
             case "summary-store" when args.Length == 3 && int.TryParse(args[2], out var interpreted) && interpreted > 0:
-                await Served.CommandAsync(Path.GetFullPath(args[1]), "migrate");
-                StoreSeeder.InterpretedKits(Path.GetFullPath(args[1]), interpreted);
+                await StoreSeeder.NewSummaryStoreAsync(Path.GetFullPath(args[1]), interpreted);
                 return 0;
             case "load" when args.Length == 5 && double.TryParse(args[3], out var rate) && int.TryParse(args[4], out var seconds):
             {

@@ -26,8 +26,7 @@ public class LabIntakeBenchmark
     public void FreshService()
     {
         var database = Path.Combine(folder, $"intake-{iteration++}.db");
-        Served.CommandAsync(database, "migrate").GetAwaiter().GetResult();
-        codes = StoreSeeder.ReceivedKits(database, Kits);
+        codes = StoreSeeder.NewStoreAsync(database, Kits).GetAwaiter().GetResult();
         csv = Batches.Csv(codes);
         var key = Served.KeyAsync(database, "lab").GetAwaiter().GetResult();
         service = Served.ServiceAsync(database).GetAwaiter().GetResult();

@@ -24,8 +24,7 @@ public class SummaryBenchmark
     [GlobalSetup]
     public void Seed()
     {
-        Served.CommandAsync(database, "migrate").GetAwaiter().GetResult();
-        StoreSeeder.InterpretedKits(database, Kits);
+        StoreSeeder.NewSummaryStoreAsync(database, Kits).GetAwaiter().GetResult();
         var key = Served.KeyAsync(database, "health").GetAwaiter().GetResult();
         service = Served.ServiceAsync(database).GetAwaiter().GetResult();
         health = service.Client(key);

@@ -41,15 +41,14 @@ public static class QueryValueProblems
         return null;
     }
 
-    // The types the endpoints take from a query; any other is left to the framework's page (null: not known here).
+    // The types the endpoints take as optional query values; any other is left to the framework's page (null: not
+    // known here).
     private static bool? Converts(Type type, string value) => type switch
     {
         _ when type == typeof(int) => int.TryParse(value, NumberStyles.Integer, CultureInfo.InvariantCulture, out _),
         _ when type == typeof(long) => long.TryParse(value, NumberStyles.Integer, CultureInfo.InvariantCulture, out _),
         _ when type == typeof(bool) => bool.TryParse(value, out _),
         _ when type == typeof(Guid) => Guid.TryParse(value, out _),
-        _ when type == typeof(DateTimeOffset) => DateTimeOffset.TryParse(value, CultureInfo.InvariantCulture, out _),
-        _ when type == typeof(DateOnly) => DateOnly.TryParse(value, CultureInfo.InvariantCulture, out _),
         _ => null,
     };
 }

@@ -167,8 +167,7 @@ internal sealed class PerformanceTable(bool quick)
     {
         var kits = quick ? 200_000 : 1_000_000;
         var database = Path.Combine(folder, "summary.db");
-        await Served.CommandAsync(database, "migrate");
-        StoreSeeder.InterpretedKits(database, kits);
+        await StoreSeeder.NewSummaryStoreAsync(database, kits);
         var health = await Served.KeyAsync(database, "health");
         using var server = await Served.ServiceAsync(database);
         using var client = server.Client(health);

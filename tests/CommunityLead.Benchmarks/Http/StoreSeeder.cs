@@ -21,8 +21,15 @@ internal static class StoreSeeder
         return ReceivedKits(database, count);
     }
 
+    /// <summary>A new store at <paramref name="database"/>, migrated by the service's own command, holding <paramref name="kits"/> interpreted kits.</summary>
+    public static async Task NewSummaryStoreAsync(string database, int kits)
+    {
+        await Served.CommandAsync(database, "migrate");
+        InterpretedKits(database, kits);
+    }
+
     /// <summary>Kits received by the lab, waiting for results; their codes, valid check characters included.</summary>
-    public static IReadOnlyList<string> ReceivedKits(string database, int count)
+    private static IReadOnlyList<string> ReceivedKits(string database, int count)
     {
         var codes = new HashSet<string>();
         while (codes.Count < count) codes.Add(KitCode.NewCode());
@@ -68,7 +75,7 @@ internal static class StoreSeeder
     /// Interpreted kits for the health summary: <paramref name="kits"/> kits over homes five kits apiece, two years
     /// of collections, both bottles' lead results (first draw and flushed) in the bands' proportions.
     /// </summary>
-    public static void InterpretedKits(string database, int kits)
+    private static void InterpretedKits(string database, int kits)
     {
         var homes = kits / 5;
         using var connection = new SqliteConnection($"Data Source={database}");
