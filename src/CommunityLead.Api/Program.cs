@@ -48,7 +48,7 @@ app.UseForwardedHeaders();
 app.UseSecurityHeaders();
 app.UseCommunityLeadPages();
 app.UseExceptionHandler();
-app.UseStatusCodePages(QueryValueProblems.HandleAsync);
+app.UseStatusCodePages();
 app.Use(NoNulText.InQueryAsync);
 app.UseCommunityLeadSwagger();
 app.UseAuthentication();

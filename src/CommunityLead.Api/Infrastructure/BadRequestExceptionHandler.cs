@@ -31,9 +31,10 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
             problem.Title = "The request needs a JSON body.";
             problem.Errors["body"] = ["Send the request's fields as a JSON object."];
         }
-        else if (WrongValueMessage().Match(bad.Message) is { Success: true } wrong)
+        else if (WrongValue().Match(bad.Message) is { Success: true } wrong)
         {
-            problem = WrongValue(wrong.Groups["name"].Value, wrong.Groups["value"].Value);
+            problem.Title = "The request has invalid fields.";
+            problem.Errors[wrong.Groups["name"].Value] = [$"'{wrong.Groups["value"].Value}' is not a valid value here."];
         }
         else if (Missing().Match(bad.Message) is { Success: true } missing)
         {
@@ -52,14 +53,6 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
             HttpContext = context, ProblemDetails = problem, Exception = exception,
         });
     }
-
-    /// <summary>A query or route value that does not convert to its parameter's type.</summary>
-    internal static HttpValidationProblemDetails WrongValue(string name, string value) => new()
-    {
-        Status = StatusCodes.Status400BadRequest,
-        Title = "The request has invalid fields.",
-        Errors = { [name] = [$"'{value}' is not a valid value here."] },
-    };
 
     private static bool OwnMessage(JsonException json) =>
         json.Message is OffsetRequiredConverter.Message or NoNulText.Message or FiniteNumbers.Message;
@@ -122,7 +115,7 @@ public sealed partial class BadRequestExceptionHandler(IProblemDetailsService pr
 
     // "Failed to bind parameter "int page" from "abc"."
     [GeneratedRegex(@"^Failed to bind parameter ""(?:[^""]* )?(?<name>\w+)"" from ""(?<value>.*)""\.$")]
-    private static partial Regex WrongValueMessage();
+    private static partial Regex WrongValue();
 
     // "Required parameter "int page" was not provided from query string."
     [GeneratedRegex(@"^Required parameter ""(?:[^""]* )?(?<name>\w+)"" was not provided")]

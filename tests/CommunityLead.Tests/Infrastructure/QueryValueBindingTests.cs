@@ -5,10 +5,10 @@ using static CommunityLead.Tests.Infrastructure.BadInput;
 namespace CommunityLead.Tests.Infrastructure;
 
 /// <summary>
-/// An optional query value that does not convert is refused naming it, whichever type it has, although the compiled
-/// endpoints answer it with a bare 400 of their own (QueryValueProblems).
+/// An optional query value that does not convert is refused naming it, whichever type it has (ASP.NET Core's request
+/// delegate generator, tried for start-up, answered these with a bare 400: a guard for any such change).
 /// </summary>
-public class QueryValueProblemsTests
+public class QueryValueBindingTests
 {
     [Fact]
     public async Task OptionalQueryValues_ThatDoNotConvert_Are400NamingTheValue()
