@@ -88,7 +88,10 @@ public class ConsoleWalkTests
         // its bottles are dated from the issue the service recorded (to the second), never from the minute on the clock.
         var issued = DateTime.Parse((await GetAsync(coordinator, $"/api/kits/{code}"))["issuedAt"]!.GetValue<string>(),
             System.Globalization.CultureInfo.InvariantCulture, System.Globalization.DateTimeStyles.AdjustToUniversal | System.Globalization.DateTimeStyles.AssumeUniversal);
-        static string Typed(DateTime t) => t.ToString("yyyy-MM-dd'T'HH:mm:ss", System.Globalization.CultureInfo.InvariantCulture);
+        // A datetime-local input holds its value normalized: whole minutes drop ":00" (HTML, valid normalized local date
+        // and time string), and Playwright refuses a fill the input would not read back as typed.
+        static string Typed(DateTime t) => t.ToString(t.Second == 0 ? "yyyy-MM-dd'T'HH:mm" : "yyyy-MM-dd'T'HH:mm:ss",
+            System.Globalization.CultureInfo.InvariantCulture);
         await page.GetByRole(AriaRole.Link, new() { Name = "Open its page" }).ClickAsync();
         await page.GetByLabel("Water last used before the first draw").FillAsync(Typed(issued.AddSeconds(2).AddHours(-8)));
         await page.Locator("#c-first-at").FillAsync(Typed(issued.AddSeconds(2)));
