@@ -23,20 +23,33 @@ public sealed class InterpretWithResults(CommunityLeadDb db, ProfileCatalog cata
     /// batch's rows: <see cref="BulkInsert"/>, <see cref="KitWrites"/>), then interprets <paramref name="completedKits"/>.
     /// A lost race throws the <see cref="DbUpdateException"/> of the failed write, with nothing written.
     /// </summary>
-    public async Task SaveAsync(IReadOnlyList<int> completedKits, Actor actor, DateTime nowUtc, Func<CommunityLeadDb, Task>? bulk = null)
+    public Task SaveAsync(IReadOnlyList<int> completedKits, Actor actor, DateTime nowUtc, Func<CommunityLeadDb, Task>? bulk = null) =>
+        SaveAsync(actor, nowUtc, async (store, interpret) =>
+        {
+            if (bulk is not null) await bulk(store);
+            await interpret(completedKits);
+        });
+
+    /// <summary>
+    /// Saves everything the context tracks, then runs <paramref name="work"/>, which writes without the change tracker
+    /// and hands each set of kits it completed to the function it is given, to be interpreted there and then (a large
+    /// batch a chunk of kits at a time); all in the one transaction. Whatever <paramref name="work"/> throws leaves nothing written.
+    /// </summary>
+    public async Task SaveAsync(Actor actor, DateTime nowUtc, Func<CommunityLeadDb, Func<IReadOnlyList<int>, Task>, Task> work)
     {
         var uncancellable = CancellationToken.None;
         await using var transaction = await db.Database.BeginTransactionAsync(uncancellable);
         await db.SaveChangesAsync(uncancellable);
-        if (bulk is not null) await bulk(db);
-        IReadOnlyDictionary<int, KitOutcome> outcomes = new Dictionary<int, KitOutcome>();
-        if (completedKits.Count > 0)
+        var bands = new List<Rules.Interpretation.Band>();
+        await work(db, async completedKits =>
         {
+            if (completedKits.Count == 0) return;
             // What the context tracked is saved; the interpretation reads what it needs afresh, inside this transaction.
             db.ChangeTracker.Clear();
-            outcomes = await KitInterpreting.InterpretAsync(db, catalog, completedKits, actor, nowUtc, json.Value.SerializerOptions, uncancellable);
-        }
+            var outcomes = await KitInterpreting.InterpretAsync(db, catalog, completedKits, actor, nowUtc, json.Value.SerializerOptions, uncancellable);
+            bands.AddRange(outcomes.Values.Select(o => o.Band));
+        });
         await transaction.CommitAsync(uncancellable);
-        ServiceMetrics.Interpreted(outcomes.Values.Select(o => o.Band));
+        ServiceMetrics.Interpreted(bands);
     }
 }

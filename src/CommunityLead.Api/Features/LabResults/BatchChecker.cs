@@ -8,9 +8,9 @@ namespace CommunityLead.Api.Features.LabResults;
 
 /// <summary>
 /// Every check a batch must pass before anything is written. It collects all problems rather than stopping at
-/// the first, so the lab can fix its file in one go. Rows are checked a chunk at a time (<see cref="AddResultsAsync"/>),
-/// so a streamed batch is checked as it is read; once a problem is found, checked rows are no longer kept, since
-/// the batch will be refused, and a file of bad rows costs no more memory than a chunk.
+/// the first, so the lab can fix its file in one go. Rows are checked a chunk at a time (<see cref="AddResultsAsync"/>
+/// hands back the chunk's passed rows), so a streamed batch is checked as it is read and keeps per row only its key;
+/// what the QC verdict needs is tallied as the rows pass (<see cref="BatchTally"/>).
 /// </summary>
 public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, TimeProvider clock)
 {
@@ -22,17 +22,24 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
 
     private BatchProblemList problems = new(0);
     private DateTimeOffset? analyzedAt;
-    private List<CheckedResult> results = [];
     // Kit, bottle and analyte of every row that passed, with where it was: a second report of one is a problem.
-    private readonly Dictionary<string, string> seen = [];
+    private readonly Dictionary<ResultKey, string> seen = [];
+    private readonly Dictionary<Analyte, int> sampleCounts = [];
+    private readonly Dictionary<Analyte, double> reportingLimits = [];
+    private bool anySampleFigures;
     private int rows;
     private bool anyKit, allSoil = true;
 
     public async Task<(CheckedBatch? Batch, BatchProblemList Problems)> CheckAsync(ParsedBatch parsed, CancellationToken ct)
     {
         Begin(parsed.Request, parsed.Problems);
-        foreach (var chunk in (parsed.Request.Results ?? []).Chunk(ChunkSize)) await AddResultsAsync(chunk, ct);
-        return (Finish(parsed.Request, parsed.Request.Qc ?? []), problems);
+        var results = new List<CheckedResult>();
+        foreach (var chunk in (parsed.Request.Results ?? []).Chunk(ChunkSize))
+        {
+            var passed = await AddResultsAsync(chunk, ct);
+            if (problems.Count == 0) results.AddRange(passed);
+        }
+        return (await FinishAsync(parsed.Request, parsed.Request.Qc ?? [], new HeldResults(results)), problems);
     }
 
     /// <summary>Checks the batch's own fields; problems found from here on go to <paramref name="list"/>.</summary>
@@ -43,8 +50,10 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         analyzedAt = Time(header.AnalyzedAt);
     }
 
-    public async Task AddResultsAsync(IReadOnlyList<ResultRow> chunk, CancellationToken ct)
+    /// <summary>Checks a chunk of result rows; the rows that passed, normalised (none once the batch has a problem).</summary>
+    public async Task<IReadOnlyList<CheckedResult>> AddResultsAsync(IReadOnlyList<ResultRow> chunk, CancellationToken ct)
     {
+        var results = new List<CheckedResult>(chunk.Count);
         rows += chunk.Count;
         var codes = chunk.Select(r => KitCode.Parse(r.KitCode)).ToList();
         var wanted = codes.Where(c => c.IsValid).Select(c => c.Code!).Distinct().ToList();
@@ -73,17 +82,22 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
             anyKit = true;
             allSoil &= kit.Kind == KitKind.Soil;
             if (rowCheck.Check(row, kit, samples[kit.Id]) is not { } result) continue;
-            var key = $"{kit.Code}|{result.Bottle}|{row.Position}|{result.Location}|{result.Analyte}";
-            if (!seen.TryAdd(key, row.Where))
-                problems.Add(new(row.Where, "analyte", $"This kit, bottle and analyte were already reported at {seen[key]}."));
+            if (!seen.TryAdd(result.Key, row.Where))
+                problems.Add(new(row.Where, "analyte", $"This kit, bottle and analyte were already reported at {seen[result.Key]}."));
             else if (problems.Count == 0)
+            {
                 results.Add(result);
+                sampleCounts[result.Analyte] = sampleCounts.GetValueOrDefault(result.Analyte) + 1;
+                reportingLimits[result.Analyte] = Math.Min(result.ReportingLimit, reportingLimits.GetValueOrDefault(result.Analyte, double.PositiveInfinity));
+                anySampleFigures |= row.Intensities is not null || row.RunOrder is not null;
+            }
         }
-        if (problems.Count > 0 && results.Count > 0) results = [];
+        return problems.Count == 0 ? results : [];
     }
 
     /// <summary>After the last row: the QC rows, then the batch if nothing was wrong.</summary>
-    public CheckedBatch? Finish(BatchRequest header, IReadOnlyList<QcRow> qcRows)
+    /// <param name="results">Where the passed rows are when they are stored: kept in memory, or read again from the spooled file.</param>
+    public async Task<CheckedBatch?> FinishAsync(BatchRequest header, IReadOnlyList<QcRow> qcRows, CheckedResults results)
     {
         if (rows == 0) problems.Add(new("", "results", "A batch needs at least one result."));
         // QC rows name no kit; a batch of soil results has soil QC. Judged by the rows' kits, not only the rows that
@@ -96,10 +110,11 @@ public sealed class BatchChecker(CommunityLeadDb db, LabIntakeOptions options, T
         runCheck.CheckRows([], qcRows);
         var (calibrations, references, repeats) = runCheck.Check(header.Run, matrix);
         if (problems.Count > 0) return null;
+        var tally = new BatchTally(seen.Count, sampleCounts, reportingLimits, seen);
         return new CheckedBatch(header.BatchId!, header.Method!, analyzedAt!.Value, header.Correction == true,
-            header.CorrectionReason, results, qc)
+            header.CorrectionReason, tally, results, qc)
         {
-            Run = RunAssembly.Assemble(results, qcRows, qc, calibrations, references, repeats),
+            Run = await RunAssembly.AssembleAsync(anySampleFigures, results, qcRows, qc, calibrations, references, repeats),
         };
     }
 

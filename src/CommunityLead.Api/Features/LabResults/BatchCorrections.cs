@@ -17,7 +17,7 @@ public static class BatchCorrections
     public static async Task<IReadOnlyList<BatchProblem>> RowsLeftOutAsync(CommunityLeadDb db, string batchId,
         CheckedBatch correction, CancellationToken ct)
     {
-        var restated = correction.Results.Select(r => (r.KitId, r.Bottle, r.Row.Position, r.Location, r.Analyte)).ToHashSet();
+        var restated = correction.Tally.Restated;
         var inEffect = await db.LabResults.AsNoTracking()
             .Where(r => r.Batch!.BatchId == batchId && r.SupersededAtUtc == null
                         && (r.Batch.Status == BatchStatus.Accepted || r.Batch.Status == BatchStatus.Released))
@@ -25,7 +25,7 @@ public static class BatchCorrections
             .OrderBy(r => r.Id)
             .ToListAsync(ct);
         return [.. inEffect
-            .Where(r => !restated.Contains((r.KitId, r.Bottle, r.Position, r.Location, r.Analyte)))
+            .Where(r => !restated.ContainsKey(new ResultKey(r.KitId, r.Bottle, r.Position, r.Location, r.Analyte)))
             .Select(r => new BatchProblem("", "results",
                 $"{Describe(r)} is in effect from this batch. A correction restates every such result, changed or not, " +
                 "so include it. Leaving it out would not withdraw it; to withdraw a result, tell the program's coordinator."))];

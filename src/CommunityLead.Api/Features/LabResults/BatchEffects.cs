@@ -36,6 +36,34 @@ public static class BatchEffects
         }
     }
 
+    /// <summary>
+    /// A batch's effects once its results are stored (at intake, or a held batch released), inside the caller's
+    /// transaction: its kits a chunk at a time, each chunk's moves written and the kits it completed handed to
+    /// <paramref name="interpret"/> before the next chunk is read, so memory stays bounded however large the batch.
+    /// A kit's effects depend only on that kit's rows, so chunking by kit decides exactly what the whole batch at once would.
+    /// </summary>
+    /// <exception cref="ConflictException">A kit cannot move (nothing of the transaction may be kept).</exception>
+    public static async Task ApplyStoredAsync(CommunityLeadDb db, LabBatch batch, Actor actor, DateTime nowUtc,
+        Func<IReadOnlyList<int>, Task> interpret)
+    {
+        var none = CancellationToken.None;
+        var kitIds = await db.LabResults.Where(r => r.LabBatchId == batch.Id).Select(r => r.KitId).Distinct().OrderBy(id => id).ToListAsync(none);
+        foreach (var chunk in kitIds.Chunk(BatchChecker.ChunkSize))
+        {
+            var results = await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == batch.Id && chunk.Contains(r.KitId)).ToListAsync(none);
+            var outcome = await ApplyAsync(db, batch, results, actor, nowUtc, none);
+            if (outcome.Conflict is { } conflict) throw new ConflictException(conflict);
+            await outcome.WriteAsync(db, nowUtc);
+            await interpret(outcome.Analyzed);
+        }
+    }
+
+    /// <summary>A kit the batch cannot move: the answer to give once the transaction is rolled back.</summary>
+    public sealed class ConflictException(ProblemHttpResult problem) : Exception(problem.ProblemDetails.Title)
+    {
+        public ProblemHttpResult Problem { get; } = problem;
+    }
+
     public static async Task<Outcome> ApplyAsync(CommunityLeadDb db, LabBatch batch, IReadOnlyList<LabResult> results,
         Actor actor, DateTime nowUtc, CancellationToken ct)
     {

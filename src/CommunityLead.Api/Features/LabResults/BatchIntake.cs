@@ -121,30 +121,33 @@ public static class BatchIntake
 
         var now = intake.Clock.GetUtcNow().UtcDateTime;
         var entity = BatchRecords.NewBatch(batch, (latest?.Version ?? 0) + 1, hash, format, options.Qc, actor, now, intake.JsonOptions);
-        // The batch's own row goes through the context; its result and QC rows are inserted in bulk once it has its key.
-        var (results, qc) = (entity.Results, entity.Qc);
-        (entity.Results, entity.Qc) = ([], []);
+        // The batch's own row goes through the context; its QC and result rows are inserted in bulk once it has its key,
+        // the results a chunk at a time as they are handed out (a CSV batch's are read again from its spooled file).
+        var qc = entity.Qc;
+        entity.Qc = [];
         db.LabBatches.Add(entity);
         db.AuditTrail.Add(Audit.Batch(actor, now, entity.BatchId, batch.Correction ? "post-correction" : "post",
             KebabEnum.Name(entity.Status), entity.CorrectionReason,
             $"version {entity.Version}, {entity.ResultCount} results, {format}, QC {(entity.Status == BatchStatus.Held ? "failed" : "passed")}"));
-        var effects = entity.InEffect ? await BatchEffects.ApplyAsync(db, entity, results, actor, now, ct) : null;
-        if (effects?.Conflict is { } illegal) return illegal;
         try
         {
-            await intake.Interpreting.SaveAsync(effects?.Analyzed ?? [], actor, now, async store =>
+            await intake.Interpreting.SaveAsync(actor, now, async (store, interpret) =>
             {
-                foreach (var row in results) row.LabBatchId = entity.Id;
                 foreach (var row in qc) row.LabBatchId = entity.Id;
                 await BulkInsert.InsertAsync(store, qc);
-                await BulkInsert.InsertAsync(store, results);
-                if (effects is not null) await effects.WriteAsync(store, now);
+                await batch.Results.ForEachChunkAsync(chunk =>
+                    BulkInsert.InsertAsync(store, [.. chunk.Select(r => BatchRecords.Result(r, entity.Id, intake.JsonOptions))]));
+                if (entity.InEffect) await BatchEffects.ApplyStoredAsync(store, entity, actor, now, interpret);
             });
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
             // Another post of this batch id won the race, or a kit changed meanwhile: nothing of ours was written.
             return BatchProblems.Raced(batch.BatchId);
+        }
+        catch (BatchEffects.ConflictException e)
+        {
+            return e.Problem;
         }
         return TypedResults.Created($"/api/lab/batches/{Uri.EscapeDataString(entity.BatchId)}",
             await BatchViews.OutcomeAsync(db, entity, intake.JsonOptions, forCoordinator: false, ct));

@@ -39,17 +39,18 @@ public static class BatchReleasing
         batch.ReleaseReason = request.Reason!.Trim();
         db.AuditTrail.Add(Audit.Batch(actor, now, batchId, "release", KebabEnum.Name(BatchStatus.Released), batch.ReleaseReason,
             $"version {batch.Version}"));
-        var results = await db.LabResults.AsNoTracking().Where(r => r.LabBatchId == batch.Id).ToListAsync(ct);
-        var effects = await BatchEffects.ApplyAsync(db, batch, results, actor, now, ct);
-        if (effects.Conflict is { } illegal) return illegal;
         try
         {
             // The release, its effects and the interpretation they call for: one transaction, not cancellable.
-            await interpreting.SaveAsync(effects.Analyzed, actor, now, store => effects.WriteAsync(store, now));
+            await interpreting.SaveAsync(actor, now, (store, interpret) => BatchEffects.ApplyStoredAsync(store, batch, actor, now, interpret));
         }
         catch (DbUpdateException e) when (StoreErrors.IsLostRace(e))
         {
             return BatchProblems.Raced(batchId, "Read the batch again: it may already be released.");
+        }
+        catch (BatchEffects.ConflictException e)
+        {
+            return e.Problem;
         }
         return TypedResults.Ok(await BatchViews.OutcomeAsync(db, batch, json.Value.SerializerOptions, forCoordinator: true, ct));
     }

@@ -40,11 +40,11 @@ internal static class UninterpretedResults
         db.LabBatches.Add(entity);
         db.AuditTrail.Add(Audit.Batch(Lab, now, entity.BatchId, "post", KebabEnum.Name(entity.Status), null,
             $"version 1, {entity.ResultCount} results, {parsed.Format}"));
-        var effects = await BatchEffects.ApplyAsync(db, entity, entity.Results, Lab, now, default);
-        Assert.Null(effects.Conflict);
         await using var transaction = await db.Database.BeginTransactionAsync();
         await db.SaveChangesAsync();
-        await effects.WriteAsync(db, now);
+        await checkedBatch.Results.ForEachChunkAsync(chunk => BulkInsert.InsertAsync(db, [.. chunk.Select(r => BatchRecords.Result(r, entity.Id, json))]));
+        // The kits move as at intake, but nothing is interpreted.
+        await BatchEffects.ApplyStoredAsync(db, entity, Lab, now, _ => Task.CompletedTask);
         await transaction.CommitAsync();
     }
 }

@@ -182,8 +182,7 @@ public class BatchLengthTests
         var json = new JsonSerializerOptions(JsonSerializerDefaults.Web);
         JsonSetup.Configure(json);
 
-        var stored = BatchRecords.NewBatch(new CheckedBatch("B", "M", late, false, null, [result], []), 1, "h", "json", new QcWindows(),
-            new Actor("lab", Roles.Lab), DateTime.UtcNow, json).Results.Single();
+        var stored = BatchRecords.Result(result, 1, json);
 
         Assert.InRange(stored.ReplicatesJson!.Length, 1, StoreModel.MaxLength("LabResult.ReplicatesJson"));
         Assert.InRange(stored.HoldingFlags!.Length, 1, StoreModel.MaxLength("LabResult.HoldingFlags"));
