@@ -50,6 +50,7 @@ app.UseCommunityLeadPages();
 app.UseExceptionHandler();
 app.UseStatusCodePages();
 app.Use(NoNulText.InQueryAsync);
+app.Use(UnconvertedQueryValues.NameThemAsync);
 app.UseCommunityLeadSwagger();
 app.UseAuthentication();
 app.UseAuthorization();
