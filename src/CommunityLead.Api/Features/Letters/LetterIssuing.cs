@@ -106,12 +106,14 @@ public sealed class LetterIssuing(CommunityLeadDb db, ProfileCatalog catalog, IL
 
     /// <summary>
     /// Renders on every core: a mailing is hundreds of letters, each pure work on its own content (the layout is
-    /// thread-safe and gives the same bytes for the same content whichever thread draws it). Order is kept.
+    /// thread-safe and gives the same bytes for the same content whichever thread draws it). Order is kept. One worker per
+    /// core at most: the pool starts more threads at once than there are cores (ThreadPoolMinThreads), and more workers
+    /// than cores draw no faster.
     /// </summary>
     private LetterFile[] RenderAll(List<Draft> drafts, CancellationToken ct)
     {
         var files = new LetterFile[drafts.Count];
-        Parallel.For(0, drafts.Count, new ParallelOptions { CancellationToken = ct }, i =>
+        Parallel.For(0, drafts.Count, new ParallelOptions { CancellationToken = ct, MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
         {
             var pdf = layout.Render(drafts[i].Content, out var pages);
             files[i] = new LetterFile(pdf, pages, Convert.ToHexStringLower(SHA256.HashData(pdf)),
