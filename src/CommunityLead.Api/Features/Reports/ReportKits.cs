@@ -27,13 +27,42 @@ public static class ReportKits
 {
     public static async Task<List<ReportKit>> LoadAsync(CommunityLeadDb db, ProgramCalendar calendar, CancellationToken ct)
     {
-        var kits = await KitRows(db).ToListAsync(ct);
-        var lead = (await FirstDrawLead(db).ToListAsync(ct)).ToLookup(r => r.KitId, r => (r.Value, r.Below));
+        // The kits are read as a stream and each made a report kit at once, with its lead values and days looked up:
+        // a list of every row, then a look-up of every result, then copies of both, held three times what is kept
+        // (a million kits peaked at 2.1 GB).
+        var lead = new Dictionary<int, (double Value, bool Below)[]>();
+        await foreach (var r in ReportKitReading.FirstDrawLeadAsync(db, ct))
+            lead[r.KitId] = lead.TryGetValue(r.KitId, out var earlier) ? [.. earlier, (r.Value, r.Below)] : [(r.Value, r.Below)];
         var days = await DaysToLetter(db).ToDictionaryAsync(d => d.KitId, d => d.Days, ct);
-        return [.. kits.OrderBy(k => k.Id).Select(k => new ReportKit(
-            k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, Month(calendar.DateOf(k.DatedUtc)), k.AreaCode, k.WaterSource, k.YearBuilt,
-            k.ServiceLine, k.ChildUnder6, k.Returned, k.Band, k.LeadBand, k.CopperBand,
-            [.. lead[k.Id]], days.TryGetValue(k.Id, out var d) ? d : null))];
+        // A million kits name a few dozen areas: one string each in the set kept, not one per kit.
+        var areas = new Dictionary<string, string>(StringComparer.Ordinal);
+        var kits = new List<ReportKit>();
+        var ids = new List<int>();
+        await foreach (var k in ReportKitReading.KitsAsync(db, ct))
+        {
+            ids.Add(k.Id);
+            kits.Add(new ReportKit(k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, Month(calendar.DateOf(k.DatedUtc)),
+                areas.TryGetValue(k.AreaCode, out var area) ? area : areas[k.AreaCode] = k.AreaCode, k.WaterSource, k.YearBuilt,
+                k.ServiceLine, k.ChildUnder6, k.Returned, k.Band, k.LeadBand, k.CopperBand,
+                lead.GetValueOrDefault(k.Id, []), days.TryGetValue(k.Id, out var d) ? d : null));
+        }
+        // The protection depends on the kits' order, so it is the order of their ids whatever order the store read them in
+        // (SQLite reads them in that order already; PostgreSQL need not).
+        if (!IsAscending(ids))
+        {
+            var order = ids.ToArray();
+            var sorted = kits.ToArray();
+            Array.Sort(order, sorted);
+            return [.. sorted];
+        }
+        return kits;
+    }
+
+    private static bool IsAscending(List<int> ids)
+    {
+        for (var i = 1; i < ids.Count; i++)
+            if (ids[i] < ids[i - 1]) return false;
+        return true;
     }
 
     // The three queries a decision reads, public so a test can ask each store for its plan (ReportQueryPlanTests). A kit

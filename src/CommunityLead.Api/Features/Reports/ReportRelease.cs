@@ -28,16 +28,19 @@ public sealed class ReportRelease(IOptions<ReportOptions> options, ProgramCalend
     public async Task<Dictionary<ReportKitKind, KindTable>> TablesAsync(CommunityLeadDb db, CancellationToken ct)
     {
         var asked = await VersionAsync(db, ct);
-        if (current is { } hit && hit.Version == asked) return hit.Tables;
+        if (Of(current, asked) is { } hit) return hit;
         // One decision at a time: requests arriving while the set is decided wait for it rather than each reading
         // every kit again.
         await deciding.WaitAsync(ct);
         try
         {
-            if (current is { } kept && kept.Version == asked) return kept.Tables;
-            if (latest is { } newer && newer.Version >= asked) return newer.Tables;
+            if (Of(current, asked) is { } kept) return kept;
+            if (Of(latest, asked, orNewer: true) is { } newer) return newer;
             // The work is shared by everyone waiting, so no single request's hanging up may cancel it; only stopping does.
             var stopping = lifetime.ApplicationStopping;
+            // Nobody can be given the sets held now (each is older than this question, or it would have been returned),
+            // so they go before the kits are read rather than after: a million kits' set is hundreds of megabytes.
+            (current, latest) = (null, null);
             var before = await VersionAsync(db, stopping);
             var tables = SummaryTables.Protect(await ReportKits.LoadAsync(db, calendar, stopping), options.Value);
             var decided = new Decided(before, tables);
@@ -51,6 +54,11 @@ public sealed class ReportRelease(IOptions<ReportOptions> options, ProgramCalend
             deciding.Release();
         }
     }
+
+    // Not a pattern in the async method: its variables live as long as the method does, so a set that did not match
+    // would be held through the whole decision of its successor.
+    private static Dictionary<ReportKitKind, KindTable>? Of(Decided? decided, long version, bool orNewer = false) =>
+        decided is not null && (decided.Version == version || orNewer && decided.Version > version) ? decided.Tables : null;
 
     private static Task<long> VersionAsync(CommunityLeadDb db, CancellationToken ct) =>
         db.ReportInputs.AsNoTracking().Select(r => r.Version).SingleAsync(ct);
