@@ -6,6 +6,7 @@ using CommunityLead.Rules.Households;
 using CommunityLead.Rules.Interpretation;
 using CommunityLead.Rules.Kits;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Storage;
 using KitRow = CommunityLead.Api.Features.Reports.ReportKits.KitRow;
 using LeadRow = CommunityLead.Api.Features.Reports.ReportKits.LeadRow;
 
@@ -37,6 +38,7 @@ public static class ReportKitReading
         {
             await using var command = db.Database.GetDbConnection().CreateCommand();
             command.CommandText = sql ??= Packed(ReportKits.KitRows(db).ToQueryString());
+            command.Transaction = db.Database.CurrentTransaction?.GetDbTransaction();
             await using var reader = await command.ExecuteReaderAsync(ct);
             var areas = new HashSet<string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
             while (await reader.ReadAsync(ct)) yield return Row(reader.GetString(0), areas);
@@ -55,6 +57,7 @@ public static class ReportKitReading
         {
             await using var command = db.Database.GetDbConnection().CreateCommand();
             command.CommandText = ReportKits.FirstDrawLead(db).ToQueryString();
+            command.Transaction = db.Database.CurrentTransaction?.GetDbTransaction();
             await using var reader = await command.ExecuteReaderAsync(ct);
             if (reader.FieldCount != 3) throw new InvalidOperationException($"The lead query returns {reader.FieldCount} values a row, not 3.");
             while (await reader.ReadAsync(ct)) yield return new LeadRow(reader.GetInt32(0), reader.GetDouble(1), reader.GetBoolean(2));
