@@ -40,8 +40,7 @@ public static class ReportKitReading
             command.CommandText = sql ??= Packed(ReportKits.KitRows(db).ToQueryString());
             command.Transaction = db.Database.CurrentTransaction?.GetDbTransaction();
             await using var reader = await command.ExecuteReaderAsync(ct);
-            var areas = new HashSet<string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
-            while (await reader.ReadAsync(ct)) yield return Row(reader.GetString(0), areas);
+            while (await reader.ReadAsync(ct)) yield return Row(reader.GetString(0));
         }
         finally
         {
@@ -76,14 +75,14 @@ public static class ReportKitReading
                + string.Join(" || char(31) || ", names.Select(n => $"ifnull({n}, '')")) + " FROM \"r\"";
     }
 
-    private static KitRow Row(string text, HashSet<string>.AlternateLookup<ReadOnlySpan<char>> areas)
+    private static KitRow Row(string text)
     {
         Span<Range> parts = stackalloc Range[Columns + 1];
         var s = text.AsSpan();
-        if (s.Split(parts, Separator) != Columns)
-            throw new InvalidOperationException($"A report row holds {s.Split(parts, Separator)} values, not {Columns}.");
-        if (!areas.TryGetValue(s[parts[3]], out var area)) areas.Add(area = s[parts[3]].ToString());
-        return new KitRow(int.Parse(s[parts[0]], CultureInfo.InvariantCulture), Names<KitKind>.Of(s[parts[1]]), StoredDate.Utc(s[parts[2]]), area,
+        var count = s.Split(parts, Separator);
+        if (count != Columns) throw new InvalidOperationException($"A report row holds {count} values, not {Columns}.");
+        return new KitRow(int.Parse(s[parts[0]], CultureInfo.InvariantCulture), Names<KitKind>.Of(s[parts[1]]), StoredDate.Utc(s[parts[2]]),
+            s[parts[3]].ToString(),
             Names<WaterSource>.Of(s[parts[4]]), s[parts[5]].IsEmpty ? null : int.Parse(s[parts[5]], CultureInfo.InvariantCulture),
             Names<ServiceLineMaterial>.Of(s[parts[6]]), s[parts[7]] is "1", s[parts[8]] is "1",
             Names<Band>.OrNull(s[parts[9]]), Names<Band>.OrNull(s[parts[10]]), Names<Band>.OrNull(s[parts[11]]));

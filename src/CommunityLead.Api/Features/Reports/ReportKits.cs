@@ -38,31 +38,22 @@ public static class ReportKits
         var areas = new Dictionary<string, string>(StringComparer.Ordinal);
         var kits = new List<ReportKit>();
         var ids = new List<int>();
+        var ascending = true;
         await foreach (var k in ReportKitReading.KitsAsync(db, ct))
         {
+            ascending &= ids.Count == 0 || k.Id > ids[^1];
             ids.Add(k.Id);
             kits.Add(new ReportKit(k.Kind == KitKind.Soil ? ReportKitKind.Soil : ReportKitKind.Water, Month(calendar.DateOf(k.DatedUtc)),
                 areas.TryGetValue(k.AreaCode, out var area) ? area : areas[k.AreaCode] = k.AreaCode, k.WaterSource, k.YearBuilt,
                 k.ServiceLine, k.ChildUnder6, k.Returned, k.Band, k.LeadBand, k.CopperBand,
                 lead.GetValueOrDefault(k.Id, []), days.TryGetValue(k.Id, out var d) ? d : null));
         }
+        if (ascending) return kits;
         // The protection depends on the kits' order, so it is the order of their ids whatever order the store read them in
         // (SQLite reads them in that order already; PostgreSQL need not).
-        if (!IsAscending(ids))
-        {
-            var order = ids.ToArray();
-            var sorted = kits.ToArray();
-            Array.Sort(order, sorted);
-            return [.. sorted];
-        }
-        return kits;
-    }
-
-    private static bool IsAscending(List<int> ids)
-    {
-        for (var i = 1; i < ids.Count; i++)
-            if (ids[i] < ids[i - 1]) return false;
-        return true;
+        var sorted = kits.ToArray();
+        Array.Sort(ids.ToArray(), sorted);
+        return [.. sorted];
     }
 
     // The three queries a decision reads, public so a test can ask each store for its plan (ReportQueryPlanTests). A kit
